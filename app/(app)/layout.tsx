@@ -1,0 +1,7 @@
+import { AppShell } from "@/components/shell/app-shell";
+import { requireUser } from "@/lib/session";
+
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  const actor = await requireUser();
+  return <AppShell actor={actor}>{children}</AppShell>;
+}

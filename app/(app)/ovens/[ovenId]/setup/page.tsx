@@ -1,0 +1,51 @@
+import { loadOvenForPage } from "@/db/queries/oven-page";
+import { OVEN_KIND_LABELS, SERVICE_STATE_LABELS } from "@/lib/validation/oven";
+import { formatDateTime } from "@/lib/format";
+
+export const metadata = { title: "Setup" };
+
+function Row({ label, value }: { label: string; value: React.ReactNode }) {
+  return (
+    <div className="grid grid-cols-[9rem_1fr] gap-3 border-b border-paper-line py-2 last:border-0">
+      <dt className="text-sm text-ink-muted">{label}</dt>
+      <dd className="text-sm">{value ?? <span className="text-ink-faint">not recorded</span>}</dd>
+    </div>
+  );
+}
+
+export default async function OvenSetup({ params }: { params: Promise<{ ovenId: string }> }) {
+  const { oven, line, site } = await loadOvenForPage((await params).ovenId);
+  return (
+    <div className="grid gap-6 lg:grid-cols-2">
+      <section className="card p-5" aria-labelledby="data-heading">
+        <h2 id="data-heading" className="mb-2 font-semibold">
+          Oven data
+        </h2>
+        <dl>
+          <Row label="Tag" value={oven.tag} />
+          <Row label="Name" value={oven.name} />
+          <Row label="Kind" value={OVEN_KIND_LABELS[oven.kind]} />
+          <Row label="Heating zones" value={oven.zones ? <span className="num">{oven.zones}</span> : null} />
+          <Row label="Maker" value={oven.maker} />
+          <Row label="Model" value={oven.model} />
+          <Row label="Serial number" value={oven.serial ? <span className="num">{oven.serial}</span> : null} />
+          <Row label="Installed on" value={oven.installedOn ? <span className="num">{oven.installedOn}</span> : null} />
+          <Row label="Service state" value={SERVICE_STATE_LABELS[oven.serviceState]} />
+          <Row label="Line" value={`${line.name}, ${site.name}`} />
+          <Row label="Site time zone" value={site.timeZone} />
+          <Row label="Last edited" value={<span className="num">{formatDateTime(oven.updatedAt, site.timeZone)}</span>} />
+        </dl>
+        {oven.notes ? <p className="mt-3 whitespace-pre-line text-sm text-ink-soft">{oven.notes}</p> : null}
+      </section>
+      <section className="card p-5" aria-labelledby="config-heading">
+        <h2 id="config-heading" className="mb-2 font-semibold">
+          Current configuration
+        </h2>
+        <p className="text-sm text-ink-muted">
+          The current fan, baffle, heater and firmware configuration is derived from the change log. No change has been logged for{" "}
+          {oven.tag} yet. Its default process window and test board are set here once verification runs are in use.
+        </p>
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,79 @@
+import "server-only";
+import { NextResponse } from "next/server";
+import type { z } from "zod";
+import { getDb } from "@/db";
+import type { Db } from "@/db/client";
+import type { Actor } from "./actor";
+import { AppError, forbidden, invalidInput, unauthorized } from "./errors";
+import { can, type Permission } from "./permissions";
+import { getRequestActor } from "./session";
+
+export type ApiContext<P> = { req: Request; actor: Actor; db: Db; params: P };
+type RouteCtx = { params: Promise<Record<string, string | string[]>> };
+
+export function errorResponse(err: AppError) {
+  return NextResponse.json({ error: { code: err.code, message: err.message, details: err.details ?? null } }, { status: err.status });
+}
+
+function toResponse(err: unknown) {
+  if (err instanceof AppError) return errorResponse(err);
+  const status = (err as { status?: number })?.status;
+  if (typeof status === "number" && status >= 400 && status < 500 && err instanceof Error && "code" in err) {
+    // Errors from the pure core (e.g. a bad logger file) carry a code and a status of their own.
+    const e = err as Error & { code: string; details?: Record<string, unknown> };
+    return NextResponse.json({ error: { code: e.code, message: e.message, details: e.details ?? null } }, { status });
+  }
+  console.error("[api] unexpected error", err);
+  return errorResponse(new AppError("internal", "Something went wrong on the server. It has been logged; try again."));
+}
+
+/**
+ * The one wrapper for route handlers: authenticate (bearer token or session cookie),
+ * check the permission, hand over the database, and turn every error into the JSON shape.
+ */
+export function withApi<P = Record<string, string>>(
+  handler: (ctx: ApiContext<P>) => Promise<Response | unknown>,
+  options: { permission: Permission | null; what?: string },
+) {
+  const route = async (req: Request, ctx: RouteCtx) => {
+    try {
+      const actor = await getRequestActor(req.headers.get("authorization"));
+      if (!actor) throw unauthorized();
+      if (options.permission && !can(actor.role, options.permission)) throw forbidden(options.what ?? options.permission.replace(".", " "));
+      const params = ((await ctx?.params) ?? {}) as P;
+      const result = await handler({ req, actor, db: await getDb(), params });
+      return result instanceof Response ? result : NextResponse.json(result);
+    } catch (err) {
+      return toResponse(err);
+    }
+  };
+  // Read by the security test that checks every route is in the role matrix.
+  Object.assign(route, { permission: options.permission });
+  return route;
+}
+
+/** Parses a JSON body with a zod schema; a broken or invalid body is a 400 naming the fields. */
+export async function readJson<S extends z.ZodType>(req: Request, schema: S): Promise<z.infer<S>> {
+  let body: unknown;
+  try {
+    body = await req.json();
+  } catch {
+    throw new AppError("invalid_input", "The request body is not valid JSON.", { fields: { _: "not valid JSON" } });
+  }
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) throw invalidInput(parsed.error.issues);
+  return parsed.data;
+}
+
+export function parseQuery<S extends z.ZodType>(req: Request, schema: S): z.infer<S> {
+  const params = Object.fromEntries(new URL(req.url).searchParams.entries());
+  const parsed = schema.safeParse(params);
+  if (!parsed.success) throw invalidInput(parsed.error.issues);
+  return parsed.data;
+}
+
+export function parseId(raw: string | undefined, what: string): number {
+  const id = Number(raw);
+  if (!Number.isInteger(id) || id <= 0) throw new AppError("not_found", `${what} was not found.`);
+  return id;
+}

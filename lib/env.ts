@@ -1,0 +1,38 @@
+import { z } from "zod";
+
+// Every setting Ovenward reads, validated once. Defaults make `npm run demo` work on a fresh machine.
+const envSchema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  DATABASE_URL: z.string().min(1).default("file:./data/ovenward.db"),
+  DATABASE_AUTH_TOKEN: z.string().optional(),
+  AUTH_SECRET: z.string().min(16).optional(),
+  AUTH_URL: z.string().url().optional(),
+  PORT: z.coerce.number().int().positive().default(3000),
+  SMTP_URL: z.string().default("smtp://127.0.0.1:2525"),
+  SMTP_SINK: z.enum(["on", "off"]).default("off"),
+  SMTP_SINK_PORT: z.coerce.number().int().positive().default(2525),
+  MAIL_FROM: z.string().default("Ovenward <ovenward@brightwater.example>"),
+  DEMO_MODE: z.enum(["on", "off"]).default("off"),
+  DEMO_PASSWORD: z.string().min(8).default("ovenward-demo"),
+  UPLOAD_DIR: z.string().default("./data/uploads"),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+let cached: Env | undefined;
+
+export function env(): Env {
+  if (!cached) {
+    const parsed = envSchema.safeParse(process.env);
+    if (!parsed.success) {
+      const fields = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+      throw new Error(`Ovenward's configuration is invalid (${fields}). See .env.example.`);
+    }
+    cached = parsed.data;
+  }
+  return cached;
+}
+
+export function appUrl(): string {
+  return env().AUTH_URL ?? `http://localhost:${env().PORT}`;
+}

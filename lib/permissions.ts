@@ -1,0 +1,39 @@
+import type { Role } from "@/db/schema/users";
+
+// The one table of who may do what. Every server action and route handler names one of these.
+export const PERMISSIONS = [
+  "fleet.read",
+  "oven.read",
+  "oven.create",
+  "oven.update",
+  "oven.retire",
+  "site.manage",
+  "user.manage",
+  "token.manage",
+  "audit.read",
+  "profile.analyze",
+  "mail.sink.read",
+] as const;
+export type Permission = (typeof PERMISSIONS)[number];
+
+const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze"];
+
+export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
+  viewer: READ,
+  technician: READ,
+  engineer: [...READ, "oven.create", "oven.update"],
+  manager: [...READ, "oven.create", "oven.update", "audit.read"],
+  admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read"],
+};
+
+export function can(role: Role, permission: Permission): boolean {
+  return ROLE_PERMISSIONS[role].includes(permission);
+}
+
+export const ROLE_LABELS: Record<Role, string> = {
+  viewer: "Viewer",
+  technician: "Technician",
+  engineer: "Engineer",
+  manager: "Manager",
+  admin: "Admin",
+};

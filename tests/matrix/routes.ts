@@ -1,0 +1,42 @@
+// The role × route matrix: every route handler the app has, and the status each role must get.
+// tests/unit/security/coverage.test.ts fails when a route exists that is not listed here;
+// tests/e2e/api.matrix.spec.ts calls each one over HTTP as every role.
+export type Who = "anonymous" | "viewer" | "technician" | "engineer" | "manager" | "admin";
+export const WHO: Who[] = ["anonymous", "viewer", "technician", "engineer", "manager", "admin"];
+
+export type RouteCase = {
+  method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
+  /** The file under app/ that handles it. */
+  file: string;
+  path: string | ((ctx: { ovenId: number; unique: string }) => string);
+  body?: (ctx: { ovenId: number; unique: string; lineId: number }) => unknown;
+  multipart?: "logger-file";
+  expect: Record<Who, number>;
+};
+
+const all = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: ok, technician: ok, engineer: ok, manager: ok, admin: ok });
+const engineerUp = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: 403, technician: 403, engineer: ok, manager: ok, admin: ok });
+
+export const ROUTE_MATRIX: RouteCase[] = [
+  { method: "GET", file: "app/api/health/route.ts", path: "/api/health", expect: { anonymous: 200, viewer: 200, technician: 200, engineer: 200, manager: 200, admin: 200 } },
+  { method: "GET", file: "app/api/v1/me/route.ts", path: "/api/v1/me", expect: all(200) },
+  { method: "GET", file: "app/api/v1/ovens/route.ts", path: "/api/v1/ovens", expect: all(200) },
+  {
+    method: "POST",
+    file: "app/api/v1/ovens/route.ts",
+    path: "/api/v1/ovens",
+    body: ({ unique, lineId }) => ({ tag: `M-${unique}`, name: "Matrix oven", lineId, kind: "convection", zones: 8 }),
+    expect: engineerUp(201),
+  },
+  { method: "GET", file: "app/api/v1/ovens/[ovenId]/route.ts", path: ({ ovenId }) => `/api/v1/ovens/${ovenId}`, expect: all(200) },
+  {
+    method: "PATCH",
+    file: "app/api/v1/ovens/[ovenId]/route.ts",
+    path: ({ ovenId }) => `/api/v1/ovens/${ovenId}`,
+    body: ({ unique }) => ({ notes: `matrix ${unique}` }),
+    expect: engineerUp(200),
+  },
+];
+
+/** Route files that are not Ovenward's API but the sign-in library's own endpoints. */
+export const FRAMEWORK_ROUTES = ["app/api/auth/[...nextauth]/route.ts"];
