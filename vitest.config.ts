@@ -9,6 +9,6 @@ export default defineConfig({
     testTimeout: 30_000,
     hookTimeout: 60_000,
     pool: "forks",
-    env: { SMTP_SINK_PORT: "2727", SMTP_URL: "smtp://127.0.0.1:2727", AUTH_URL: "http://localhost:3999" },
+    env: { SMTP_SINK_PORT: process.env.VITEST_SMTP_PORT ?? "2727", SMTP_URL: `smtp://127.0.0.1:${process.env.VITEST_SMTP_PORT ?? "2727"}`, AUTH_URL: "http://localhost:3999" },
   },
 });
