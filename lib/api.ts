@@ -77,3 +77,21 @@ export function parseId(raw: string | undefined, what: string): number {
   if (!Number.isInteger(id) || id <= 0) throw new AppError("not_found", `${what} was not found.`);
   return id;
 }
+
+/**
+ * Reads a multipart body, refusing oversized uploads before reading them when the client
+ * states a length, and after reading when it does not.
+ */
+export async function readMultipart(req: Request, { maxBytes, label }: { maxBytes: number; label: string }): Promise<FormData> {
+  const type = req.headers.get("content-type") ?? "";
+  if (!type.toLowerCase().startsWith("multipart/form-data"))
+    throw new AppError("unsupported_file", `Send the ${label} as multipart/form-data (a form upload).`, { contentType: type || null });
+  const declared = Number(req.headers.get("content-length") ?? "0");
+  const limit = maxBytes + 256 * 1024; // room for the other form fields
+  if (declared > limit) throw new AppError("file_too_large", `The ${label} is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`, { maxBytes });
+  try {
+    return await req.formData();
+  } catch {
+    throw new AppError("invalid_input", "The multipart body could not be read. Check that the upload finished.", { fields: { file: "unreadable upload" } });
+  }
+}

@@ -1,3 +1,4 @@
+import fs from "node:fs";
 import { expect, test } from "@playwright/test";
 import { ROUTE_MATRIX, WHO, type Who } from "../matrix/routes";
 import { createTokenWithCli, USERS } from "./support";
@@ -24,7 +25,10 @@ for (const route of ROUTE_MATRIX) {
       const ctx = { ovenId, unique, lineId };
       const path = typeof route.path === "string" ? route.path : route.path(ctx);
       const headers: Record<string, string> = who === "anonymous" ? {} : { authorization: `Bearer ${tokens[who]}` };
-      const res = await request.fetch(path, { method: route.method, headers, data: route.body ? route.body(ctx) : undefined });
+      const multipart = route.multipart
+        ? { file: { name: "generic-8ch.csv", mimeType: "text/csv", buffer: fs.readFileSync("tests/fixtures/logger-files/generic-8ch.csv") } }
+        : undefined;
+      const res = await request.fetch(path, { method: route.method, headers, data: route.body ? route.body(ctx) : undefined, multipart });
       expect(res.status(), await res.text()).toBe(expected);
       if (expected >= 400) {
         const body = await res.json();

@@ -36,6 +36,13 @@ export const ROUTE_MATRIX: RouteCase[] = [
     body: ({ unique }) => ({ notes: `matrix ${unique}` }),
     expect: engineerUp(200),
   },
+  {
+    method: "POST",
+    file: "app/api/v1/profiles/analyze/route.ts",
+    path: "/api/v1/profiles/analyze",
+    multipart: "logger-file",
+    expect: all(200),
+  },
 ];
 
 /** Route files that are not Ovenward's API but the sign-in library's own endpoints. */
