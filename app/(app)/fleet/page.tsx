@@ -55,9 +55,14 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
                   <li key={oven.id}>
                     <Link
                       href={`/ovens/${oven.id}`}
-                      className="card flex flex-col gap-2 p-4 hover:border-ember-ring sm:grid sm:grid-cols-[8rem_1fr_12rem_8rem] sm:items-center sm:gap-4"
+                      className="card flex flex-col gap-1 p-4 hover:border-ember-ring sm:grid sm:grid-cols-[8rem_1fr_12rem_8rem] sm:items-center sm:gap-4"
                     >
-                      <span className="text-lg font-semibold tracking-wide">{oven.tag}</span>
+                      <span className="flex items-center justify-between gap-2">
+                        <span className="text-lg font-semibold tracking-wide">{oven.tag}</span>
+                        <span className="sm:hidden">
+                          <ServiceStateBadge state={oven.serviceState} />
+                        </span>
+                      </span>
                       <span className="min-w-0">
                         <span className="block truncate font-medium">{oven.name}</span>
                         <span className="block text-sm text-ink-muted">
@@ -66,7 +71,7 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
                         </span>
                       </span>
                       <span className="text-sm text-ink-muted">{[oven.maker, oven.model].filter(Boolean).join(" ") || "Maker not recorded"}</span>
-                      <span>
+                      <span className="hidden sm:block">
                         <ServiceStateBadge state={oven.serviceState} />
                       </span>
                     </Link>

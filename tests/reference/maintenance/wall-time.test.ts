@@ -62,8 +62,13 @@ describe("site wall clock → instant", () => {
     fc.assert(
       fc.property(wallArb, fc.constantFrom(...ZONES), (wallMs, zone) => {
         const d = new Date(wallMs);
+        const ours = wallMsToInstant(wallMs, zone);
+        // TZDate resolves wall times that occur twice differently by zone (earlier in America/*,
+        // later in Europe/*), so only unambiguous wall times are compared here; overlaps and gaps
+        // are checked against Intl below and in dst-transitions.test.ts.
+        fc.pre(ours.resolution === "exact");
         const tzd = new TZDate(d.getUTCFullYear(), d.getUTCMonth(), d.getUTCDate(), d.getUTCHours(), d.getUTCMinutes(), zone);
-        expect(wallMsToInstant(wallMs, zone).instant.getTime()).toBe(tzd.getTime());
+        expect(ours.instant.getTime()).toBe(tzd.getTime());
       }),
       { numRuns: 500 },
     );

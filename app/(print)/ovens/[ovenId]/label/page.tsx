@@ -1,4 +1,6 @@
+import Link from "next/link";
 import QRCode from "qrcode";
+import { buttonClass } from "@/components/ui/button";
 import { loadOvenForPage } from "@/db/queries/oven-page";
 import { OvenwardMark } from "@/components/brand/logo";
 import { requirePermission } from "@/lib/session";
@@ -24,9 +26,15 @@ export default async function OvenLabel({ params }: { params: Promise<{ ovenId: 
         </p>
       </div>
       <p className="no-print max-w-sm text-center text-sm text-ink-muted">
-        Print at 100 % on a label or plain paper. The code opens <span className="break-all">{url}</span>; signing in is still required.
+        Print at 100 % on a label or plain paper. The code opens <span className="whitespace-nowrap">{url}</span>; signing in is still
+        required.
       </p>
-      <PrintButton />
+      <div className="no-print flex gap-3">
+        <PrintButton />
+        <Link href={`/ovens/${oven.id}/setup`} className={buttonClass("secondary")}>
+          Back to {oven.tag}
+        </Link>
+      </div>
     </main>
   );
 }

@@ -3,7 +3,7 @@ import { Button } from "@/components/ui/button";
 
 export function PrintButton() {
   return (
-    <Button variant="primary" className="no-print" onClick={() => window.print()}>
+    <Button variant="primary" onClick={() => window.print()}>
       Print the label
     </Button>
   );
