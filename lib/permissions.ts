@@ -13,15 +13,17 @@ export const PERMISSIONS = [
   "audit.read",
   "profile.analyze",
   "mail.sink.read",
+  "change.read",
+  "change.create",
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze"];
+const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze", "change.read"];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   viewer: READ,
   technician: READ,
-  engineer: [...READ, "oven.create", "oven.update"],
+  engineer: [...READ, "oven.create", "oven.update", "change.create"],
   manager: [...READ, "oven.create", "oven.update", "audit.read"],
   admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read"],
 };

@@ -10,6 +10,7 @@ import { signOutAction } from "./actions";
 
 function navFor(actor: Actor): { main: NavItem[]; admin: NavItem[] } {
   const main: NavItem[] = [{ href: "/fleet", label: "Fleet" }];
+  if (can(actor.role, "change.read")) main.push({ href: "/changes", label: "Changes" });
   const admin: NavItem[] = [];
   if (can(actor.role, "user.manage")) admin.push({ href: "/settings/people", label: "People" });
   if (can(actor.role, "site.manage")) admin.push({ href: "/settings/sites", label: "Sites and lines" });

@@ -38,6 +38,7 @@ export const ACTION_INPUTS: Record<string, (db: Db, role: Role) => Promise<Recor
     const [t] = await db.insert(apiTokens).values({ userId: await userId(db, "tech@brightwater.example"), name: "r", role: "technician", prefix: "ow_x", tokenHash: uid() }).returning();
     return { tokenId: String(t.id) };
   },
+  createChange: async (db) => ({ ovenId: String(await anyOven(db)), at: new Date(Date.now() - 60_000).toISOString(), area: "baffle", summary: `Baffle ${uid()}`, after: "plate B" }),
   createSite: async () => ({ name: `Site ${uid()}`, timeZone: "America/Chicago" }),
   createLine: async (db) => {
     const [l] = await db.select().from(lines).limit(1);

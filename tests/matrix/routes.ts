@@ -43,6 +43,15 @@ export const ROUTE_MATRIX: RouteCase[] = [
     multipart: "logger-file",
     expect: all(200),
   },
+  { method: "GET", file: "app/api/v1/changes/route.ts", path: "/api/v1/changes", expect: all(200) },
+  { method: "GET", file: "app/api/v1/ovens/[ovenId]/changes/route.ts", path: ({ ovenId }) => `/api/v1/ovens/${ovenId}/changes`, expect: all(200) },
+  {
+    method: "POST",
+    file: "app/api/v1/ovens/[ovenId]/changes/route.ts",
+    path: ({ ovenId }) => `/api/v1/ovens/${ovenId}/changes`,
+    body: ({ unique }) => ({ at: new Date(Date.now() - 60_000).toISOString(), area: "controller_firmware", summary: `Matrix firmware ${unique}`, before: "2.3.1", after: "2.4.0" }),
+    expect: { anonymous: 401, viewer: 403, technician: 403, engineer: 201, manager: 403, admin: 403 },
+  },
 ];
 
 /** Route files that are not Ovenward's API but the sign-in library's own endpoints. */

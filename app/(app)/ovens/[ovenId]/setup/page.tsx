@@ -1,6 +1,9 @@
 import { loadOvenForPage } from "@/db/queries/oven-page";
 import { OVEN_KIND_LABELS, SERVICE_STATE_LABELS } from "@/lib/validation/oven";
 import { formatDateTime } from "@/lib/format";
+import { currentConfiguration } from "@/db/queries/changes";
+import { getDb } from "@/db";
+import { CHANGE_AREA_LABELS } from "@/lib/validation/change";
 
 export const metadata = { title: "Setup" };
 
@@ -15,6 +18,7 @@ function Row({ label, value }: { label: string; value: React.ReactNode }) {
 
 export default async function OvenSetup({ params }: { params: Promise<{ ovenId: string }> }) {
   const { oven, line, site } = await loadOvenForPage((await params).ovenId);
+  const config = await currentConfiguration(await getDb(), oven.id);
   return (
     <div className="grid gap-6 lg:grid-cols-2">
       <section className="card p-5" aria-labelledby="data-heading">
@@ -41,10 +45,25 @@ export default async function OvenSetup({ params }: { params: Promise<{ ovenId: 
         <h2 id="config-heading" className="mb-2 font-semibold">
           Current configuration
         </h2>
-        <p className="text-sm text-ink-muted">
-          The current fan, baffle, heater and firmware configuration is derived from the change log. No change has been logged for{" "}
-          {oven.tag} yet. Its default process window and test board are set here once verification runs are in use.
-        </p>
+        {config.length ? (
+          <dl>
+            {config.map((c) => (
+              <Row
+                key={c.area}
+                label={CHANGE_AREA_LABELS[c.area]}
+                value={
+                  <>
+                    <span className="font-medium">{c.after}</span>
+                    <span className="block text-xs text-ink-muted">since {formatDateTime(c.at, site.timeZone)}</span>
+                  </>
+                }
+              />
+            ))}
+          </dl>
+        ) : (
+          <p className="text-sm text-ink-muted">No change has been logged for {oven.tag} yet; its configuration is as delivered.</p>
+        )}
+        <p className="mt-3 text-xs text-ink-muted">Derived from the modification log: the latest value logged in each area.</p>
       </section>
     </div>
   );

@@ -1,0 +1,66 @@
+import "server-only";
+import { and, asc, desc, eq, gte, lte, type SQL } from "drizzle-orm";
+import type { Db, DbOrTx } from "../client";
+import { changes, type ChangeRow } from "../schema/changes";
+import { ovens } from "../schema/fleet";
+import { users } from "../schema/users";
+import { recordAudit } from "./audit";
+import type { Actor } from "@/lib/actor";
+import { notFound } from "@/lib/errors";
+import type { ChangeCreateInput, ChangeFilter } from "@/lib/validation/change";
+
+export async function createChange(db: Db, ovenId: number, input: ChangeCreateInput, actor: Actor): Promise<ChangeRow> {
+  return db.transaction(async (tx) => {
+    const [oven] = await tx.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId)).limit(1);
+    if (!oven) throw notFound("That oven");
+    const [row] = await tx
+      .insert(changes)
+      .values({ ovenId, at: input.at, area: input.area, summary: input.summary, before: input.before ?? null, after: input.after, reason: input.reason ?? null, workOrderId: input.workOrderId ?? null, createdBy: actor.userId })
+      .returning();
+    await recordAudit(tx, { actor, action: "change.create", entity: "oven_change", entityId: row.id, after: row });
+    return row;
+  });
+}
+
+export async function listChanges(db: DbOrTx, filter: ChangeFilter & { limit?: number } = {}) {
+  const where: SQL[] = [];
+  if (filter.ovenId) where.push(eq(changes.ovenId, filter.ovenId));
+  if (filter.area) where.push(eq(changes.area, filter.area));
+  if (filter.from) where.push(gte(changes.at, filter.from));
+  if (filter.to) where.push(lte(changes.at, filter.to));
+  return db
+    .select({ change: changes, oven: { id: ovens.id, tag: ovens.tag }, author: { name: users.name, email: users.email } })
+    .from(changes)
+    .innerJoin(ovens, eq(ovens.id, changes.ovenId))
+    .leftJoin(users, eq(users.id, changes.createdBy))
+    .where(where.length ? and(...where) : undefined)
+    .orderBy(desc(changes.at), desc(changes.id))
+    .limit(filter.limit ?? 500);
+}
+export type ChangeListRow = Awaited<ReturnType<typeof listChanges>>[number];
+
+/** The oven's current configuration: the latest `after` value in each area, in time order. */
+export async function currentConfiguration(db: DbOrTx, ovenId: number) {
+  const rows = await db.select().from(changes).where(eq(changes.ovenId, ovenId)).orderBy(asc(changes.at), asc(changes.id));
+  const latest = new Map<string, ChangeRow>();
+  for (const r of rows) latest.set(r.area, r);
+  return [...latest.values()].sort((a, b) => a.area.localeCompare(b.area));
+}
+
+export function changeJson(row: ChangeListRow) {
+  const c = row.change;
+  return {
+    id: c.id,
+    ovenId: c.ovenId,
+    ovenTag: row.oven.tag,
+    at: c.at.toISOString(),
+    area: c.area,
+    summary: c.summary,
+    before: c.before,
+    after: c.after,
+    reason: c.reason,
+    workOrderId: c.workOrderId,
+    by: row.author?.name ?? row.author?.email ?? null,
+  };
+}
+export type ChangeJson = ReturnType<typeof changeJson>;
