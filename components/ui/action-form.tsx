@@ -1,5 +1,6 @@
 "use client";
-import { useActionState, type ReactNode } from "react";
+import type { ReactNode } from "react";
+import { useFormAction } from "./use-form-action";
 import { FormMessage } from "./field";
 import type { ActionResult } from "@/lib/action";
 
@@ -20,10 +21,10 @@ export function ActionForm({
   children: (state: { fields?: Record<string, string>; pending: boolean }) => ReactNode;
   render?: (result: ActionResult<unknown>) => ReactNode;
 }) {
-  const [state, submit, pending] = useActionState(action, null);
+  const { state, onSubmit, pending } = useFormAction(action);
   const fields = state && !state.ok ? state.fields : undefined;
   return (
-    <form action={submit} className={className} noValidate>
+    <form onSubmit={onSubmit} className={className} noValidate>
       {children({ fields, pending })}
       {state && (!state.ok ? !fields : true) ? <FormMessage result={state} /> : null}
       {state && render ? render(state) : null}
