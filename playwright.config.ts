@@ -24,7 +24,7 @@ export default defineConfig({
   outputDir: "test-results/e2e",
   use: { baseURL: E2E.baseURL, launchOptions, trace: "off", screenshot: "only-on-failure" },
   projects: [
-    { name: "api", testMatch: /api\..*spec\.ts/ },
+    { name: "api", testMatch: /api\..*spec\.ts/, use: { launchOptions } },
     { name: "laptop", testMatch: /ui\..*spec\.ts/, use: { ...devices["Desktop Chrome"], viewport: { width: 1366, height: 900 }, launchOptions } },
     { name: "phone", testMatch: /ui\.views\.spec\.ts/, use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, launchOptions } },
   ],
