@@ -43,7 +43,16 @@ export function medianInterval(time: ArrayLike<number>): number {
   const n = time.length;
   if (n < 2) return 0;
   const d = new Float64Array(n - 1);
-  for (let i = 1; i < n; i++) d[i - 1] = time[i] - time[i - 1];
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 1; i < n; i++) {
+    const x = time[i] - time[i - 1];
+    d[i - 1] = x;
+    if (x < lo) lo = x;
+    if (x > hi) hi = x;
+  }
+  // Evenly sampled (to rounding): every spacing is the median; skip the sort.
+  if (hi - lo <= 1e-9 * Math.max(1, hi)) return d[(n - 1) >> 1];
   d.sort();
   const mid = (n - 1) >> 1;
   return (n - 1) % 2 === 1 ? d[mid] : (d[mid - 1] + d[mid]) / 2;

@@ -1,7 +1,5 @@
 import type { Channel } from "./align";
-import { firstUpCrossing } from "./curve";
 import type { BoardMetrics, ChannelMetrics, TrackingError } from "./types";
-import type { ProcessWindow } from "./windows";
 
 type Pick = (m: ChannelMetrics) => number | null;
 
@@ -18,25 +16,26 @@ function aggregate(metrics: ChannelMetrics[], pick: Pick, how: "min" | "max"): n
 
 /**
  * Largest max − min across channels at any sample time t with t_start ≤ t ≤ t_end, where
- * t_start is the earliest channel's first upward crossing of soakEnd and t_end the latest
- * channel's time at peak. Null when a channel never crosses soakEnd or no sample lies between.
+ * t_start is the earliest channel's first upward crossing of soakEnd (`soakEndCrossings`) and
+ * t_end the latest channel's time at peak. Null when a channel never crosses soakEnd or no
+ * sample lies between.
  */
 export function criticalSpread(
   time: ArrayLike<number>,
   channels: Channel[],
   metrics: ChannelMetrics[],
-  soakEnd: number,
+  soakEndCrossings: Array<number | null>,
 ): number | null {
   let start = Infinity;
-  for (const c of channels) {
-    const crossing = firstUpCrossing(time, c.values, soakEnd);
+  for (const crossing of soakEndCrossings) {
     if (crossing === null) return null;
     start = Math.min(start, crossing);
   }
   let end = -Infinity;
   for (const m of metrics) end = Math.max(end, m.timeAtPeak);
-  let spread = -Infinity;
   const m = channels.length;
+  const columns = channels.map((c) => c.values);
+  let spread = -Infinity;
   for (let k = 0; k < time.length; k++) {
     const t = time[k];
     if (t < start) continue;
@@ -44,7 +43,7 @@ export function criticalSpread(
     let lo = Infinity;
     let hi = -Infinity;
     for (let i = 0; i < m; i++) {
-      const v = channels[i].values[k];
+      const v = columns[i][k];
       if (v < lo) lo = v;
       if (v > hi) hi = v;
     }
@@ -69,10 +68,11 @@ export function trackingError(channels: Channel[], setPoint: ArrayLike<number>):
   return { mean: n > 0 ? sum / n : 0, max };
 }
 
+/** Board statistics from the probes' metrics; `soakEndCrossings[i]` is probe i's first crossing of soakEnd. */
 export function boardMetrics(
   series: { time: ArrayLike<number>; channels: Channel[]; setPoint?: { values: ArrayLike<number> } },
   metrics: ChannelMetrics[],
-  window: ProcessWindow,
+  soakEndCrossings: Array<number | null>,
   warnings: string[],
 ): BoardMetrics {
   let peakMin = Infinity;
@@ -81,7 +81,7 @@ export function boardMetrics(
     peakMin = Math.min(peakMin, m.peak);
     peakMax = Math.max(peakMax, m.peak);
   }
-  const spread = criticalSpread(series.time, series.channels, metrics, window.soakEnd);
+  const spread = criticalSpread(series.time, series.channels, metrics, soakEndCrossings);
   if (spread === null) warnings.push("The critical-phase spread is not available: not every probe reaches the soak end temperature.");
   const board: BoardMetrics = {
     peakMin,

@@ -83,28 +83,33 @@ export function rowConverter(options: {
       time = grow(time, capacity);
       outs = outs.map((o) => grow(o, capacity));
     }
+    const k = n;
     const timeCell = row[timeColumn.index];
     const raw = timeCell === undefined ? NaN : readTime(timeCell);
     if (!Number.isFinite(raw)) throw cellError(line, timeColumn.header, timeCell, timeWhat, decimalSeparator);
-    if (n === 0) first = raw;
+    if (k === 0) first = raw;
     const t = raw - first;
-    if (n > 0 && !(t > time[n - 1])) {
+    if (k > 0 && !(t > time[k - 1])) {
       throw invalidFile(
         `Row ${line}: the time "${preview(timeCell!)}" does not come after the previous row's time. Times must increase from row to row; remove repeated or out-of-order rows and upload the file again.`,
         { row: line },
       );
     }
-    time[n] = t;
+    time[k] = t;
+    // Locals, not closure slots, in the loop that runs for every cell.
+    const o = outs;
+    const idx = indices;
+    const conv = converters;
     for (let p = 0; p < m; p++) {
-      const cell = row[indices[p]];
+      const cell = row[idx[p]];
       const value = cell === undefined ? NaN : parseDecimal(cell, comma);
       if (value !== value) throw cellError(line, columns[p].column.header, cell, "a number", decimalSeparator);
-      const convert = converters[p];
+      const convert = conv[p];
       const c = convert === null ? value : convert(value);
       if (c === null || !(c >= PLAUSIBLE_MIN_C && c <= PLAUSIBLE_MAX_C)) throw implausible(line, columns[p], cell!);
-      outs[p][n] = c;
+      o[p][k] = c;
     }
-    n++;
+    n = k + 1;
   }
 
   function finish(): { time: Float64Array; values: Float64Array[] } {

@@ -38,6 +38,45 @@ export function timeAbove(t: ArrayLike<number>, v: ArrayLike<number>, x: number)
   return total;
 }
 
+export interface CurveScan {
+  peak: number;
+  timeAtPeak: number;
+  /** First upward crossing of each threshold (as firstUpCrossing), in the order given. */
+  crossings: Array<number | null>;
+  /** Time above `level` (as timeAbove). */
+  timeAbove: number;
+}
+
+/** peakOf, firstUpCrossing for several thresholds and timeAbove in one pass over the samples. */
+export function scanCurve(t: ArrayLike<number>, v: ArrayLike<number>, thresholds: readonly number[], level: number): CurveScan {
+  const n = v.length;
+  const k = thresholds.length;
+  const crossings: Array<number | null> = new Array(k).fill(null);
+  let open = k;
+  let best = 0;
+  let above = 0;
+  let a = v[0];
+  for (let j = 1; j < n; j++) {
+    const b = v[j];
+    if (b > v[best]) best = j;
+    const dt = t[j] - t[j - 1];
+    if (a >= level && b >= level) above += dt;
+    else if (a < level && b > level) above += (dt * (b - level)) / (b - a);
+    else if (a > level && b < level) above += (dt * (a - level)) / (a - b);
+    if (open > 0 && b > a) {
+      for (let i = 0; i < k; i++) {
+        const x = thresholds[i];
+        if (crossings[i] === null && a < x && b >= x) {
+          crossings[i] = t[j - 1] + ((x - a) / (b - a)) * dt;
+          open--;
+        }
+      }
+    }
+    a = b;
+  }
+  return { peak: v[best], timeAtPeak: t[best], crossings, timeAbove: above };
+}
+
 /**
  * Largest rising and falling least-squares slopes over closed windows [t_j, t_j + w], for every j
  * whose window ends within the data. Two pointers and running sums make it O(n). Sums are kept

@@ -8,6 +8,30 @@
 const POW10 = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16];
 
 export function parseDecimal(s: string, decimalComma: boolean): number {
+  // Fast path for the usual cell: optional minus, digits, at most one separator, nothing else.
+  const n = s.length;
+  let i = 0;
+  let negative = false;
+  if (s.charCodeAt(0) === 45) { negative = true; i = 1; }
+  const sep = decimalComma ? 44 : 46;
+  let mantissa = 0;
+  let digits = 0;
+  let point = -1;
+  for (; i < n; i++) {
+    const c = s.charCodeAt(i);
+    const d = c - 48;
+    if (d >= 0 && d <= 9) { mantissa = mantissa * 10 + d; digits++; }
+    else if (c === sep && point < 0) point = i;
+    else return parseGeneral(s, decimalComma);
+  }
+  if (digits === 0 || digits > 15) return parseGeneral(s, decimalComma);
+  const fraction = point < 0 ? 0 : n - 1 - point;
+  const value = fraction === 0 ? mantissa : mantissa / POW10[fraction];
+  return negative ? -value : value;
+}
+
+/** The full grammar: spaces, "+", exponent, long mantissas. */
+function parseGeneral(s: string, decimalComma: boolean): number {
   const n = s.length;
   let i = 0;
   while (i < n && s.charCodeAt(i) === 32) i++;

@@ -136,7 +136,9 @@ export function parseLoggerFile(input: LoggerFileInput, options: ParseOptions = 
     checkHead(head);
     const layout = classifyColumns(head, options.setPointColumn);
     for (const c of layout.columns) {
-      if (c.role === "ignored" && c.note === "holds no numbers") warnings.push(`Column "${c.header}" holds no numbers and was not read as a probe.`);
+      if (c.role !== "ignored" || c.note !== "holds no numbers") continue;
+      const where = head.complete ? "" : ` in its first ${CLASSIFY_ROWS} rows`;
+      warnings.push(`Column "${c.header}" holds no numbers${where} and was not read as a probe.`);
     }
     spColumn = layout.columns.find((c) => c.role === "setPoint");
     if (options.setPointColumn !== undefined && !spColumn) {

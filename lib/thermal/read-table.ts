@@ -4,7 +4,7 @@ import { invalidFile } from "./errors";
 export type Delimiter = "," | ";" | "\t";
 export type DecimalSeparator = "." | ",";
 
-/** The papaparse configuration used for every logger file (also used by the benchmark). */
+/** The papaparse settings for logger files: strings only, one header row handled by us, blank lines kept for line numbers. */
 export function papaConfig(delimiter: Delimiter): Papa.ParseConfig {
   return { delimiter, header: false, dynamicTyping: false, skipEmptyLines: false, quoteChar: '"' };
 }

@@ -2,7 +2,7 @@
  * Thermocouple tolerances and GUM (JCGM 100:2008) helpers for a measurement-uncertainty budget.
  * Tolerance = the greater of a fixed value and a fraction of |t| (°C), over the class's range.
  * Sources: IEC 60584-1:2013 classes (Pico Technology and therncway.net tables), ASTM E230/E230M
- * limits of error above 0 °C (Pelican Wire, ASTM E230-12 transcription).
+ * limits of error above 0 °C (Pelican Wire, ASTM E230/E230M-12 tolerance table as copied on Scribd).
  */
 export type ToleranceType = "K" | "J" | "T" | "N" | "E";
 export type ToleranceClass = "iec-1" | "iec-2" | "iec-3" | "astm-standard" | "astm-special";

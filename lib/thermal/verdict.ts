@@ -28,8 +28,9 @@ export function statusOf(windowUse: number | null, anyNull: boolean): VerdictSta
 
 /**
  * Judges board statistics against a process window. Each item is the % of the window it uses;
- * windowUse is the largest item. pass ≤ 90 %, marginal ≤ 100 %, fail above 100 % or when any
- * item could not be computed (null).
+ * windowUse is the largest item. pass ≤ 90 %, marginal ≤ 100 %, fail above 100 % or when a
+ * statistic could not be computed because a probe never crossed its threshold: any null item,
+ * or a null heat-up rate (judged by no item, but still a threshold the run never met).
  */
 export function judge(board: BoardMetrics, window: ProcessWindow): Verdict {
   const items: VerdictItems = {
@@ -47,5 +48,6 @@ export function judge(board: BoardMetrics, window: ProcessWindow): Verdict {
   const values = Object.values(items) as Array<number | null>;
   const present = values.filter((v): v is number => v !== null);
   const windowUse = present.length > 0 ? Math.max(...present) : null;
-  return { status: statusOf(windowUse, present.length < values.length), windowUse, items };
+  const missing = present.length < values.length || board.heatUpRate === null;
+  return { status: statusOf(windowUse, missing), windowUse, items };
 }

@@ -6,7 +6,7 @@ import {
 describe("thermocouple tolerance classes", () => {
   /*
    * IEC 60584-1:2013 classes (Pico Technology table; therncway.net JIS/IEC/ASTM comparison) and
-   * ASTM E230/E230M limits of error above 0 °C (Pelican Wire; ASTM E230-12 transcription):
+   * ASTM E230/E230M limits of error above 0 °C (Pelican Wire; ASTM E230/E230M-12 tolerance table as copied on Scribd):
    * tolerance = greater of the fixed value and the fraction of |t|. Values at reflow
    * temperatures and the crossover points are REFERENCES §3 [COMPUTED].
    */

@@ -54,6 +54,15 @@ describe("bad logger files give a ThermalFileError that names what and where", (
     expect(e.message).toContain("decimal comma");
   });
 
+  it("keeps line numbers right deep inside a large file (parsed in chunks), blank lines included", () => {
+    // 30 000 data rows (about 400 kB, several parse chunks) with a blank line after the header;
+    // the spoiled cell sits on data row 25 000, i.e. file line 25 000 + 2 (header, blank) = 25 002.
+    const lines = Array.from({ length: 30_000 }, (_, k) => `${k},${(20 + k / 1000).toFixed(3)},${(21 + k / 1000).toFixed(3)}`);
+    lines[24_999] = "24999,25.1,x25";
+    const e = failure({ text: `Time,TC1,TC2\n\n${lines.join("\n")}\n` });
+    expect(e.details).toEqual({ row: 25_002, column: "TC2" });
+  });
+
   it("an empty probe cell → 400 naming row and column", () => {
     const text = `Time,TC1,TC2\n${rows(5)}\n5,25,\n${rows(6, (k) => `${k + 6},1,2`)}`;
     const e = failure({ text });

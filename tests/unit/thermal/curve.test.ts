@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { firstUpCrossing, peakOf, slopeExtremes, timeAbove } from "@/lib/thermal/curve";
+import { firstUpCrossing, peakOf, scanCurve, slopeExtremes, timeAbove } from "@/lib/thermal/curve";
 
 /** Straightforward O(n·w) reference: least-squares slope over every closed window [t_j, t_j + w] that ends within the data. */
 function bruteForce(t: number[], v: number[], w: number): { up: number; down: number } | null {
@@ -107,5 +107,25 @@ describe("crossings, time above and peak", () => {
   it("count every excursion above the threshold", () => {
     // Two humps above 10: [0.5, 1.5] and [2.5, 3.5] → 2 s.
     expect(timeAbove([0, 1, 2, 3, 4], [5, 15, 5, 15, 5], 10)).toBeCloseTo(2, 12);
+  });
+});
+
+describe("the one-pass curve scan", () => {
+  it("agrees with the separate primitives on random curves", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.integer({ min: 0, max: 300 }), { minLength: 2, maxLength: 200 }),
+        fc.array(fc.integer({ min: 0, max: 300 }), { minLength: 1, maxLength: 5 }),
+        fc.integer({ min: 0, max: 300 }),
+        (values, thresholds, level) => {
+          const t = values.map((_, i) => i * 0.5);
+          const scan = scanCurve(t, values, thresholds, level);
+          expect({ peak: scan.peak, timeAtPeak: scan.timeAtPeak }).toEqual(peakOf(t, values));
+          expect(scan.crossings).toEqual(thresholds.map((x) => firstUpCrossing(t, values, x)));
+          expect(scan.timeAbove).toBeCloseTo(timeAbove(t, values, level), 9);
+        },
+      ),
+      { numRuns: 300 },
+    );
   });
 });

@@ -3,7 +3,7 @@ import { analyzeLoggerFile } from "@/lib/thermal/analyze";
 import { describeColumns } from "@/lib/thermal/describe-columns";
 import { emfMillivolts, type ThermocoupleType } from "@/lib/thermal/its90";
 import { parseLoggerFile } from "@/lib/thermal/parse-logger-file";
-import { EXACT, expectThreeChannelMetrics, type Tolerance } from "./helpers/expected";
+import { expectThreeChannelMetrics, type Tolerance } from "./helpers/expected";
 import { at, P, pad2, raised, SECONDS_0_TO_420, threeChannels, toFahrenheit, writeFile } from "./helpers/profiles";
 
 /*
@@ -78,6 +78,20 @@ describe("delimiters, decimal separators and line endings", () => {
     expect(describeColumns(bytes).timeColumn).toBe("Time (s)");
     expect(describeColumns(new TextEncoder().encode('\ufeff"Time (s)","TC1"\r\n0,1\r\n')).timeColumn).toBe("Time (s)");
     expectThreeChannelMetrics(analyzeLoggerFile({ bytes }));
+  });
+});
+
+describe("quoted cells", () => {
+  it("reads quoted headers and quoted decimal-comma cells in a comma-separated file", () => {
+    // A comma file can only hold decimal commas inside quotes: "216,5". (Quoted files are parsed whole.)
+    const plain = writeFile({ times: SECONDS_0_TO_420, channels: threeChannels(), delimiter: ";", decimalComma: true });
+    const quoted = plain
+      .split("\n")
+      .map((line) => (line === "" ? line : line.split(";").map((cell) => `"${cell}"`).join(",")))
+      .join("\n");
+    expect(quoted.split("\n")[0]).toBe('"Time (s)","TC1 (°C)","TC2 (°C)","TC3 (°C)"');
+    expect(parseLoggerFile({ text: quoted })).toMatchObject({ delimiter: ",", decimalSeparator: "," });
+    expectThreeChannelMetrics(analyzeLoggerFile({ text: quoted }));
   });
 });
 

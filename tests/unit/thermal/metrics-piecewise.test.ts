@@ -141,6 +141,18 @@ describe("computeMetrics without a file", () => {
     expect(board.rampUpMax).toBeCloseTo(2, 9);
   });
 
+  it("fails a run whose heat-up rate is unavailable even though every judged item is in window", () => {
+    // P starts at 20 °C, so it never rises through a heat-up start of 15 °C: heat-up rate null.
+    // Everything judged is in window (TAL 63, peak 240, soak 90, ramps 2/2, ΔT 0, time to peak 210).
+    const text = writeFile({ times: SECONDS_0_TO_420, channels: [{ header: "TC1 (°C)", celsius: (t) => at(P, t) }] });
+    const result = analyzeLoggerFile({ text }, { window: { ...DEFAULT_WINDOW, heatUpFrom: 15 } });
+    expect(result.channels[0].heatUpRate).toBeNull();
+    expect(result.board.heatUpRate).toBeNull();
+    expect(result.verdict.windowUse).toBeCloseTo(200 / 3, 9);
+    expect(result.verdict.status).toBe("fail");
+    expect(result.meta.warnings).toContain('Probe "TC1" never rises through 15 °C (heat-up start), so its heat-up rate is not available and the run fails.');
+  });
+
   it("measures time to peak from the first sample when the curve starts above 25 °C", () => {
     // P + 10 starts at 30 °C, so time to peak = timeAtPeak − 0 = 214.
     const warm = raised(10);

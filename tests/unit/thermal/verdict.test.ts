@@ -50,6 +50,12 @@ describe("window use", () => {
     expect(v.status).toBe("fail");
   });
 
+  it("fails when the heat-up rate is null although no item judges it", () => {
+    const v = judge({ ...board, heatUpRate: null }, DEFAULT_WINDOW);
+    expect(v.windowUse).toBeCloseTo(50, 9);
+    expect(v.status).toBe("fail");
+  });
+
   it("judges the critical spread only when the window limits it", () => {
     expect(judge(board, DEFAULT_WINDOW).items).not.toHaveProperty("criticalSpread");
     const v = judge(board, { ...DEFAULT_WINDOW, criticalSpreadMax: 6.5 });
