@@ -13,17 +13,20 @@ export const PERMISSIONS = [
   "audit.read",
   "profile.analyze",
   "mail.sink.read",
+  "subscription.manage.own",
+  "subscription.manage.team",
+  "outbox.manage",
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze"];
+const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze", "subscription.manage.own"];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   viewer: READ,
   technician: READ,
   engineer: [...READ, "oven.create", "oven.update"],
-  manager: [...READ, "oven.create", "oven.update", "audit.read"],
-  admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read"],
+  manager: [...READ, "oven.create", "oven.update", "audit.read", "subscription.manage.team"],
+  admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read", "subscription.manage.team", "outbox.manage"],
 };
 
 export function can(role: Role, permission: Permission): boolean {
