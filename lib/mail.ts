@@ -7,6 +7,11 @@ import { env } from "./env";
 // One transport per process, built from the validated SMTP_URL (the local sink by default).
 const g = globalThis as unknown as { __ovenwardMail?: Transporter };
 
+/** The process's transport, also used by the scheduler's drain. */
+export function mailTransport(): Transporter {
+  return transport();
+}
+
 function transport(): Transporter {
   g.__ovenwardMail ??= nodemailer.createTransport(env().SMTP_URL);
   return g.__ovenwardMail;
