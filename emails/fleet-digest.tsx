@@ -32,7 +32,7 @@ function NotTracked({ why }: { why: string }) {
 function Counts({ items, empty }: { items: Count[]; empty: string }) {
   if (items.length === 0) return <Text style={quiet}>{empty}</Text>;
   return (
-    <table cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
+    <table className="mail-data" cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
       <tbody>
         {items.map((c) => (
           <tr key={c.label}>
@@ -55,7 +55,7 @@ export function FleetDigestEmail(p: Props) {
         Good morning {p.recipientName}. Here is {p.siteName} at a glance.
       </Text>
       <Text style={sectionTitle}>Ovens by service state</Text>
-      <table cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
+      <table className="mail-data" cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
         <thead>
           <tr>
             <th style={headCell}>State</th>

@@ -30,7 +30,7 @@ export function MyWorkEmail(p: Props) {
           <Text style={emailText}>
             Good morning {p.recipientName}. {preview}; overdue work comes first.
           </Text>
-          <table cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
+          <table className="mail-data" cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
             <thead>
               <tr>
                 <th style={headCell}>Oven</th>

@@ -26,7 +26,7 @@ export function OverdueWorkEmail(p: Props) {
         {p.recipientName}, {n === 1 ? "this work order" : "these work orders"} {whose} passed {n === 1 ? "its" : "their"} due time.
         {p.as === "manager" ? " The assignee was reminded first; this note comes after the grace period." : ""}
       </Text>
-      <table cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
+      <table className="mail-data" cellPadding={0} cellSpacing={0} style={{ width: "100%", borderCollapse: "collapse" }}>
         <thead>
           <tr>
             <th style={headCell}>Oven</th>

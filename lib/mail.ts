@@ -1,6 +1,6 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
-import { render } from "@react-email/render";
+import { renderMail } from "./mail-render";
 import type { ReactElement } from "react";
 import { env } from "./env";
 
@@ -20,7 +20,7 @@ function transport(): Transporter {
 export type OutgoingMail = { to: string; subject: string; element: ReactElement; headers?: Record<string, string> };
 
 export async function sendMail(mail: OutgoingMail) {
-  const [html, text] = await Promise.all([render(mail.element), render(mail.element, { plainText: true })]);
+  const { html, text } = await renderMail(mail.element);
   const info = await transport().sendMail({ from: env().MAIL_FROM, to: mail.to, subject: mail.subject, html, text, headers: mail.headers });
   return { messageId: info.messageId, response: info.response };
 }

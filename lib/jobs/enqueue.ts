@@ -1,5 +1,5 @@
 import "server-only";
-import { render } from "@react-email/render";
+import { renderMail } from "@/lib/mail-render";
 import type { Db } from "@/db/client";
 import { enqueueOutbox } from "@/db/queries/outbox";
 import { markOccurrenceEnqueued } from "@/db/queries/subscriptions";
@@ -24,7 +24,7 @@ async function enqueueOne<P>(db: Db, def: MailKindDef<P>, due: Due<P>, now: Date
   const key = due.occurrence ? scheduledKey(def.kind, due.recipient.id, due.occurrence) : eventKey(def.kind, due.recipient.id, due.event ?? "");
   const { links, headers } = linksFor(due.recipient.id, def.kind, now);
   const { subject, element } = def.render({ ...due.props, links } as P);
-  const [html, text] = await Promise.all([render(element), render(element, { plainText: true })]);
+  const { html, text } = await renderMail(element);
   // The queue row and the subscription's high-water mark move together: a crash between two
   // messages leaves each either fully queued or not queued (and then found due again).
   return db.transaction(async (tx) => {

@@ -1,4 +1,5 @@
-import type { Role } from "@/db/schema/users";
+/** The roles of db/schema/users.ts, repeated so this module stays free of the database layer. */
+type Role = "viewer" | "technician" | "engineer" | "manager" | "admin";
 
 /*
  * The e-mails Ovenward sends on its own, what they are called in the settings, and whether they
