@@ -85,7 +85,8 @@ const myWork: MailKindDef<MyWorkProps> = {
   })),
   render: (p) => {
     const n = p.items?.length ?? 0;
-    return { subject: n ? `My work for ${p.dateLabel}: ${n} work order${n === 1 ? "" : "s"}` : `My work for ${p.dateLabel}: nothing due`, element: createElement(MyWorkEmail, p) };
+    const count = p.items === null ? "" : n ? `: ${n} work order${n === 1 ? "" : "s"}` : ": nothing due";
+    return { subject: `My work for ${p.dateLabel}${count}`, element: createElement(MyWorkEmail, p) };
   },
 };
 
