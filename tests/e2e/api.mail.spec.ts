@@ -42,7 +42,7 @@ test("RFC 8058 one-click: a POST to the List-Unsubscribe URL stops the e-mail", 
   expect(res.status()).toBe(200);
   expect(await res.json()).toEqual({ unsubscribed: true, kind: "my_work_daily" });
   const page = await (await request.get(url)).text();
-  expect(page).toContain("Done — no more “My work, each morning”");
+  expect(page.replace(/<!-- -->/g, "")).toContain("Done — no more “My work, each morning”");
   const tampered = await request.post(url.replace(/token=./, "token=X"), { form: { "List-Unsubscribe": "One-Click" } });
   expect(tampered.status()).toBe(400);
 });

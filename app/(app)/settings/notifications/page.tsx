@@ -60,11 +60,11 @@ export default async function NotificationsPage({ searchParams }: { searchParams
         </nav>
       ) : null}
       <section className="mb-6">
-        <TimeZoneForm key={`${person.id}-${person.timeZone}`} userId={person.id} timeZone={person.timeZone} zones={zones} />
+        <TimeZoneForm key={person.id} userId={person.id} timeZone={person.timeZone} zones={zones} />
       </section>
       <section className="grid gap-4" aria-label="E-mails">
         {views.map((v) => (
-          <SubscriptionForm key={`${person.id}-${v.kind}-${v.weekdays.join()}-${v.sendAt}-${v.enabled}`} userId={person.id} timeZone={person.timeZone} sub={v} />
+          <SubscriptionForm key={`${person.id}-${v.kind}`} userId={person.id} timeZone={person.timeZone} sub={v} />
         ))}
       </section>
     </>
