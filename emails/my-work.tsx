@@ -41,7 +41,7 @@ export function MyWorkEmail(p: Props) {
             <tbody>
               {[...items].sort((a, b) => Number(b.overdue) - Number(a.overdue)).map((i) => (
                 <tr key={i.url}>
-                  <td style={{ ...tableCell, fontWeight: 600 }}>{i.ovenTag}</td>
+                  <td style={{ ...tableCell, fontWeight: 600, whiteSpace: "nowrap" }}>{i.ovenTag}</td>
                   <td style={tableCell}>
                     <Link href={i.url}>{i.title}</Link>
                   </td>

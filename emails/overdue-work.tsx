@@ -38,7 +38,7 @@ export function OverdueWorkEmail(p: Props) {
         <tbody>
           {p.orders.map((o) => (
             <tr key={o.url}>
-              <td style={{ ...tableCell, fontWeight: 600 }}>{o.ovenTag}</td>
+              <td style={{ ...tableCell, fontWeight: 600, whiteSpace: "nowrap" }}>{o.ovenTag}</td>
               <td style={tableCell}>
                 <Link href={o.url}>{o.title}</Link>
               </td>
