@@ -4,6 +4,12 @@ import { renderMail } from "./mail-render";
 import type { ReactElement } from "react";
 import { env } from "./env";
 
+/**
+ * Transport timeouts well inside the outbox's SENDING_TIMEOUT_MS (lib/jobs/drain.ts): a send
+ * gives up after about two minutes at most; nodemailer's defaults allow a 10-minute idle socket.
+ */
+export const SMTP_TIMEOUTS = { connectionTimeout: 30_000, greetingTimeout: 30_000, socketTimeout: 60_000 } as const;
+
 // One transport per process, built from the validated SMTP_URL (the local sink by default).
 const g = globalThis as unknown as { __ovenwardMail?: Transporter };
 
@@ -13,7 +19,7 @@ export function mailTransport(): Transporter {
 }
 
 function transport(): Transporter {
-  g.__ovenwardMail ??= nodemailer.createTransport(env().SMTP_URL);
+  g.__ovenwardMail ??= nodemailer.createTransport({ url: env().SMTP_URL, ...SMTP_TIMEOUTS });
   return g.__ovenwardMail;
 }
 

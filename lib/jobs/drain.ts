@@ -20,6 +20,7 @@ import { afterFailure } from "@/lib/mail/outbox-policy";
  */
 
 export const SENDING_TIMEOUT_MS = 10 * 60_000;
+// (lib/mail.ts's SMTP_TIMEOUTS keep every send far shorter than this.)
 const BATCH = 25;
 
 /** The part of a nodemailer Transporter the drain uses. */
@@ -27,11 +28,16 @@ export type MailTransport = { sendMail: (mail: Record<string, unknown>) => Promi
 
 type SmtpError = Error & { responseCode?: number; response?: string; code?: string };
 
-export async function drainOutbox(db: Db, { now, transport, from, limit = 200 }: { now: Date; transport: MailTransport; from: string; limit?: number }) {
+export async function drainOutbox(
+  db: Db,
+  { now, transport, from, limit = 200, keepGoing }: { now: Date; transport: MailTransport; from: string; limit?: number; keepGoing?: () => Promise<boolean> },
+) {
   let sent = 0;
   let failed = 0;
   const staleBefore = new Date(now.getTime() - SENDING_TIMEOUT_MS);
   while (sent + failed < limit) {
+    // The tick renews its lease before each batch and stops if another instance took it over.
+    if (keepGoing && !(await keepGoing())) break;
     const leaseToken = randomUUID();
     const rows = await claimOutbox(db, { now, leaseToken, staleBefore, limit: Math.min(BATCH, limit - sent - failed) });
     if (rows.length === 0) break;

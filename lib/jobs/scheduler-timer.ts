@@ -3,6 +3,7 @@ import os from "node:os";
 import nodemailer from "nodemailer";
 import type { Db } from "@/db/client";
 import { runTick, type TickResult } from "./tick";
+import { SMTP_TIMEOUTS } from "@/lib/mail";
 
 export const TICK_INTERVAL_MS = 60_000;
 
@@ -12,7 +13,7 @@ export const TICK_INTERVAL_MS = 60_000;
  * on their own. Several app instances may each run it: the lease lets one tick at a time.
  */
 export function startSchedulerTimer({ db, smtpUrl, from, log = console.log }: { db: Db; smtpUrl: string; from: string; log?: (line: string) => void }) {
-  const transport = nodemailer.createTransport(smtpUrl);
+  const transport = nodemailer.createTransport({ url: smtpUrl, ...SMTP_TIMEOUTS });
   const holder = `${os.hostname()}:${process.pid}`;
   let running = false;
   const tick = async (): Promise<TickResult | null> => {

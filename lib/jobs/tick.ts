@@ -24,7 +24,10 @@ export async function runTick({ db, now = new Date(), transport, from, holder = 
     let generated = 0;
     for (const step of TICK_STEPS) generated += await step.run({ db, now });
     const enqueued = await enqueueDue(db, now);
-    const { sent, failed } = await drainOutbox(db, { now, transport, from });
+    // Renewal counts the time this tick has taken on from `now`, so a mocked clock stays consistent.
+    const started = Date.now();
+    const renew = () => acquireLease(db, { name: TICK_LEASE, holder, now: new Date(now.getTime() + (Date.now() - started)), ttlMs: TICK_LEASE_TTL_MS });
+    const { sent, failed } = await drainOutbox(db, { now, transport, from, keepGoing: renew });
     return { enqueued, sent, failed, generated };
   } finally {
     await releaseLease(db, { name: TICK_LEASE, holder });
