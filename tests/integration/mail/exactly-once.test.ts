@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { outbox } from "@/db/schema/mail";
-import { claimOutbox } from "@/db/queries/outbox";
+import { acquireLease, claimOutbox, releaseLease } from "@/db/queries/outbox";
 import { drainOutbox, SENDING_TIMEOUT_MS } from "@/lib/jobs/drain";
 import { messageIdFor } from "@/lib/mail/outbox-policy";
 import { mailHarness, subscribe, at } from "./mail-harness";
@@ -73,6 +73,32 @@ describe("exactly once", () => {
     const [row] = await h.db.select().from(outbox).where(eq(outbox.id, claimed[0].id));
     expect(row.state).toBe("sent");
     expect(row.leaseToken).toBeNull();
+  });
+
+  it("the lease: one holder until it expires or is released; a release by another is ignored", async () => {
+    const name = "lease-test";
+    const t = at("2027-02-01T00:00:00Z");
+    const plus = (ms: number) => new Date(t.getTime() + ms);
+    expect(await acquireLease(h.db, { name, holder: "a", now: t, ttlMs: 60_000 })).toBe(true);
+    expect(await acquireLease(h.db, { name, holder: "b", now: plus(59_000), ttlMs: 60_000 })).toBe(false);
+    expect(await acquireLease(h.db, { name, holder: "a", now: plus(59_000), ttlMs: 60_000 })).toBe(true); // renewal
+    expect(await acquireLease(h.db, { name, holder: "b", now: plus(100_000), ttlMs: 60_000 })).toBe(false); // renewed to 119 s
+    expect(await acquireLease(h.db, { name, holder: "b", now: plus(120_000), ttlMs: 60_000 })).toBe(true); // expired
+    await releaseLease(h.db, { name, holder: "a" });
+    expect(await acquireLease(h.db, { name, holder: "a", now: plus(121_000), ttlMs: 60_000 })).toBe(false);
+    await releaseLease(h.db, { name, holder: "b" });
+    expect(await acquireLease(h.db, { name, holder: "a", now: plus(121_000), ttlMs: 60_000 })).toBe(true);
+  });
+
+  it("a drain that lost its lease stops before claiming more", async () => {
+    const now = at("2027-01-09T07:00:00Z");
+    await h.stopSink();
+    await h.tick(now);
+    await h.startSink();
+    const from = "Ovenward <ovenward@brightwater.example>";
+    const later = new Date(now.getTime() + 60_000);
+    expect(await drainOutbox(h.db, { now: later, transport: h.transport, from, keepGoing: async () => false })).toEqual({ sent: 0, failed: 0 });
+    expect(await drainOutbox(h.db, { now: later, transport: h.transport, from, keepGoing: async () => true })).toEqual({ sent: 3, failed: 0 });
   });
 
   it("every copy of a message carries the Message-ID derived from its idempotency key", async () => {
