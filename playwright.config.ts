@@ -8,6 +8,9 @@ export const E2E = {
   smtpPort: Number(process.env.E2E_SMTP_PORT ?? 2626),
 };
 
+/** The shared secret the e2e server's POST /api/cron/tick accepts. */
+export const CRON_SECRET_FOR_E2E = "e2e-cron-secret-0123456789";
+
 const launchOptions = {
   executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
   args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
@@ -26,7 +29,7 @@ export default defineConfig({
   projects: [
     { name: "api", testMatch: /api\..*spec\.ts/, use: { launchOptions } },
     { name: "laptop", testMatch: /ui\..*spec\.ts/, use: { ...devices["Desktop Chrome"], viewport: { width: 1366, height: 900 }, launchOptions } },
-    { name: "phone", testMatch: /ui\.views\.spec\.ts/, use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, launchOptions } },
+    { name: "phone", testMatch: /ui\.(views|mail)\.spec\.ts/, use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, launchOptions } },
   ],
   webServer: {
     command: "node --import tsx --import ./scripts/_shims/server-only.mjs scripts/e2e-server.mts",
@@ -43,6 +46,7 @@ export default defineConfig({
       SMTP_URL: `smtp://127.0.0.1:${E2E.smtpPort}`,
       DEMO_MODE: "on",
       AUTH_SECRET: "e2e-secret-for-tests-only-0123456789",
+      CRON_SECRET: CRON_SECRET_FOR_E2E,
       AUTH_URL: E2E.baseURL,
       NODE_ENV: "production",
     },

@@ -13,7 +13,7 @@ export function InvitationEmail({ url, invitedBy, role, plant }: Props) {
       <Button href={url} style={emailButton}>
         Choose a password
       </Button>
-      <Text style={{ ...emailText, fontSize: 13, marginTop: 16 }}>
+      <Text data-skip-in-text="true" style={{ ...emailText, fontSize: 13, marginTop: 16 }}>
         Or paste this address into your browser: <Link href={url}>{url}</Link>
       </Text>
     </EmailLayout>

@@ -10,7 +10,7 @@ export function MagicLinkEmail({ url, host }: Props) {
       <Button href={url} style={emailButton}>
         Sign in to Ovenward
       </Button>
-      <Text style={{ ...emailText, fontSize: 13, marginTop: 16 }}>
+      <Text data-skip-in-text="true" style={{ ...emailText, fontSize: 13, marginTop: 16 }}>
         Or paste this address into your browser: <Link href={url}>{url}</Link>
       </Text>
     </EmailLayout>

@@ -12,6 +12,10 @@ const envSchema = z.object({
   SMTP_SINK: z.enum(["on", "off"]).default("off"),
   SMTP_SINK_PORT: z.coerce.number().int().positive().default(2525),
   MAIL_FROM: z.string().default("Ovenward <ovenward@brightwater.example>"),
+  /** Shared secret an external cron sends as `Authorization: Bearer …` to POST /api/cron/tick. */
+  CRON_SECRET: z.string().min(16).optional(),
+  /** The in-process scheduler timer (scripts/serve.mts); off when an external cron drives the tick. */
+  SCHEDULER: z.enum(["on", "off"]).default("on"),
   DEMO_MODE: z.enum(["on", "off"]).default("off"),
   DEMO_PASSWORD: z.string().min(8).default("ovenward-demo"),
   UPLOAD_DIR: z.string().default("./data/uploads"),

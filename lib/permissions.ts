@@ -15,17 +15,20 @@ export const PERMISSIONS = [
   "mail.sink.read",
   "change.read",
   "change.create",
+  "subscription.manage.own",
+  "subscription.manage.team",
+  "outbox.manage",
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze", "change.read"];
+const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze", "change.read", "subscription.manage.own"];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   viewer: READ,
   technician: READ,
   engineer: [...READ, "oven.create", "oven.update", "change.create"],
-  manager: [...READ, "oven.create", "oven.update", "audit.read"],
-  admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read"],
+  manager: [...READ, "oven.create", "oven.update", "audit.read", "subscription.manage.team"],
+  admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read", "subscription.manage.team", "outbox.manage"],
 };
 
 export function can(role: Role, permission: Permission): boolean {

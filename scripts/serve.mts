@@ -5,6 +5,7 @@ import { openDatabase } from "../db/client";
 import { migrateDatabase } from "../db/migrate";
 import { startMailSink } from "../lib/mail-sink";
 import { env } from "../lib/env";
+import { startSchedulerTimer } from "../lib/jobs/scheduler-timer";
 
 const e = env();
 const { db, client } = await openDatabase(e.DATABASE_URL, e.DATABASE_AUTH_TOKEN);
@@ -14,6 +15,11 @@ if (e.SMTP_SINK === "on") {
   sink = await startMailSink({ db, port: e.SMTP_SINK_PORT });
   console.log(`SMTP sink listening on 127.0.0.1:${e.SMTP_SINK_PORT}`);
 }
+
+// The scheduler (digests, reminders, outbox) ticks here, beside the app; SCHEDULER=off when an
+// external cron calls POST /api/cron/tick instead.
+const scheduler = e.SCHEDULER === "on" ? startSchedulerTimer({ db, smtpUrl: e.SMTP_URL, from: e.MAIL_FROM }) : null;
+if (scheduler) console.log("Scheduler ticking every minute (SCHEDULER=off to leave it to an external cron)");
 
 const child = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(e.PORT)], {
   stdio: "inherit",
@@ -26,6 +32,7 @@ const stop = (signal: NodeJS.Signals) => {
 process.on("SIGINT", () => stop("SIGINT"));
 process.on("SIGTERM", () => stop("SIGTERM"));
 child.on("exit", (code) => {
+  scheduler?.stop();
   sink?.close();
   client.close();
   process.exit(code ?? 0);

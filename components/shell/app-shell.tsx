@@ -11,10 +11,12 @@ import { signOutAction } from "./actions";
 function navFor(actor: Actor): { main: NavItem[]; admin: NavItem[] } {
   const main: NavItem[] = [{ href: "/fleet", label: "Fleet" }];
   if (can(actor.role, "change.read")) main.push({ href: "/changes", label: "Changes" });
+  if (can(actor.role, "subscription.manage.own")) main.push({ href: "/settings/notifications", label: "E-mail settings" });
   const admin: NavItem[] = [];
   if (can(actor.role, "user.manage")) admin.push({ href: "/settings/people", label: "People" });
   if (can(actor.role, "site.manage")) admin.push({ href: "/settings/sites", label: "Sites and lines" });
   if (can(actor.role, "token.manage")) admin.push({ href: "/settings/tokens", label: "API tokens" });
+  if (can(actor.role, "outbox.manage")) admin.push({ href: "/settings/outbox", label: "Outbox" });
   if (can(actor.role, "mail.sink.read") && env().SMTP_SINK === "on") admin.push({ href: "/dev/mail", label: "Captured mail" });
   return { main, admin };
 }

@@ -18,6 +18,8 @@ export const users = sqliteTable(
     failedSignIns: integer("failed_sign_ins").notNull().default(0),
     lastFailedSignInAt: integer("last_failed_sign_in_at", { mode: "timestamp_ms" }),
     lockedUntil: integer("locked_until", { mode: "timestamp_ms" }),
+    /** IANA zone the person's scheduled e-mails are timed in; the demo site's by default. */
+    timeZone: text("time_zone").notNull().default("Europe/Dublin"),
     createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
     updatedAt: integer("updated_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
   },

@@ -55,6 +55,7 @@ test("admin invites a technician, who sets a password; repeated failures then lo
   const fresh = await browser.newContext();
   const p2 = await fresh.newPage();
   await p2.goto(firstLink(invite.text, "/invite/"));
+  await p2.waitForLoadState("networkidle"); // filled before hydration, the form posts natively and loses the values
   await p2.getByLabel("New password").fill("short");
   await p2.getByLabel("The same password again").fill("short");
   await p2.getByRole("button", { name: "Set password" }).click();

@@ -15,6 +15,8 @@ export type RouteCase = {
 };
 
 const all = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: ok, technician: ok, engineer: ok, manager: ok, admin: ok });
+const adminOnly = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: 403, technician: 403, engineer: 403, manager: 403, admin: ok });
+const everyone = (status: number): Record<Who, number> => ({ anonymous: status, viewer: status, technician: status, engineer: status, manager: status, admin: status });
 const engineerUp = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: 403, technician: 403, engineer: ok, manager: ok, admin: ok });
 
 export const ROUTE_MATRIX: RouteCase[] = [
@@ -52,6 +54,12 @@ export const ROUTE_MATRIX: RouteCase[] = [
     body: ({ unique }) => ({ at: new Date(Date.now() - 60_000).toISOString(), area: "controller_firmware", summary: `Matrix firmware ${unique}`, before: "2.3.1", after: "2.4.0" }),
     expect: { anonymous: 401, viewer: 403, technician: 403, engineer: 201, manager: 403, admin: 403 },
   },
+  { method: "GET", file: "app/api/v1/outbox/route.ts", path: "/api/v1/outbox?state=sent", expect: adminOnly(200) },
+  // No user behind these: API tokens are not the cron secret (401 for all; tests/e2e/api.mail.spec.ts
+  // calls it with the secret), and an unsubscribe POST without its signed token is a 400.
+  { method: "POST", file: "app/api/cron/tick/route.ts", path: "/api/cron/tick", expect: everyone(401) },
+  { method: "POST", file: "app/api/unsubscribe/route.ts", path: "/api/unsubscribe", expect: everyone(400) },
+  { method: "GET", file: "app/(app)/dev/mail/preview/[template]/route.ts", path: "/dev/mail/preview/fleet-digest", expect: adminOnly(200) },
 ];
 
 /** Route files that are not Ovenward's API but the sign-in library's own endpoints. */

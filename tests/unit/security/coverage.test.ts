@@ -15,6 +15,15 @@ function walk(dir: string, out: string[] = []): string[] {
   return out;
 }
 
+/**
+ * Routes with no user behind them check something else instead of a role: cron routes the
+ * scheduler's shared secret (lib/cron.ts), the one-click unsubscribe its signed token.
+ */
+const SECRET_CHECKED: { match: (file: string) => boolean; wrapper: RegExp }[] = [
+  { match: (f) => f.startsWith("app/api/cron/"), wrapper: /export const POST\s*=\s*withCronSecret\(/ },
+  { match: (f) => f === "app/api/unsubscribe/route.ts", wrapper: /export const POST\s*=\s*withSignedToken\(/ },
+];
+
 const appFiles = walk(path.join(ROOT, "app"));
 const sourceFiles = [...appFiles, ...walk(path.join(ROOT, "components"))].filter((f) => /\.(ts|tsx)$/.test(f));
 
@@ -34,6 +43,11 @@ describe("route handlers", () => {
     it(`${file} goes through withApi (or is the public health check)`, () => {
       if (FRAMEWORK_ROUTES.includes(file)) return expect(text).toMatch(/export const \{ GET, POST \} = handlers/);
       if (file === "app/api/health/route.ts") return expect(fnMethods).toEqual(["GET"]);
+      const secret = SECRET_CHECKED.find((r) => r.match(file));
+      if (secret) {
+        expect(text).toMatch(secret.wrapper);
+        return expect(fnMethods).toEqual([]);
+      }
       for (const m of methods) expect(text).toMatch(new RegExp(`export const ${m}\\s*=\\s*withApi`));
       expect(fnMethods).toEqual([]);
     });

@@ -3,8 +3,13 @@ import { can, PERMISSIONS, ROLE_PERMISSIONS } from "@/lib/permissions";
 import { ROLES } from "@/db/schema/users";
 
 describe("ROLE_PERMISSIONS (brief, section 2)", () => {
-  it("a viewer only reads", () => {
-    expect(ROLE_PERMISSIONS.viewer.every((p) => p.endsWith(".read") || p === "profile.analyze")).toBe(true);
+  it("a viewer only reads (and chooses their own e-mails)", () => {
+    expect(ROLE_PERMISSIONS.viewer.every((p) => p.endsWith(".read") || p === "profile.analyze" || p === "subscription.manage.own")).toBe(true);
+  });
+  it("everyone manages their own e-mails; managers (and admins) the team's; only admins the outbox", () => {
+    expect(ROLES.filter((r) => can(r, "subscription.manage.own"))).toEqual([...ROLES]);
+    expect(ROLES.filter((r) => can(r, "subscription.manage.team"))).toEqual(["manager", "admin"]);
+    expect(ROLES.filter((r) => can(r, "outbox.manage"))).toEqual(["admin"]);
   });
   it("a technician may not edit the registry; an engineer may", () => {
     expect(can("technician", "oven.create")).toBe(false);
