@@ -13,17 +13,26 @@ export const PERMISSIONS = [
   "audit.read",
   "profile.analyze",
   "mail.sink.read",
+  "run.read",
+  "run.create",
+  "run.rejudge",
+  "run.delete",
+  "window.manage",
+  "board.manage",
+  "instrument.manage",
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze"];
+const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze", "run.read"];
+// Engineers look after the measurement: windows, boards, instruments, calibrations, re-judging and deleting runs.
+const MEASUREMENT: Permission[] = ["run.create", "run.rejudge", "run.delete", "window.manage", "board.manage", "instrument.manage"];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   viewer: READ,
-  technician: READ,
-  engineer: [...READ, "oven.create", "oven.update"],
-  manager: [...READ, "oven.create", "oven.update", "audit.read"],
-  admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read"],
+  technician: [...READ, "run.create"],
+  engineer: [...READ, ...MEASUREMENT, "oven.create", "oven.update"],
+  manager: [...READ, ...MEASUREMENT, "oven.create", "oven.update", "audit.read"],
+  admin: [...READ, ...MEASUREMENT, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read"],
 };
 
 export function can(role: Role, permission: Permission): boolean {

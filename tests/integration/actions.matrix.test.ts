@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ACTION_REGISTRY, runAction } from "@/lib/action";
 import "@/lib/actions/ovens";
 import "@/lib/actions/admin";
+import "@/lib/actions/measurement";
 import { ROLES, type Role } from "@/db/schema/users";
 import { can } from "@/lib/permissions";
 import { ACTION_INPUTS } from "../matrix/actions";
