@@ -38,7 +38,7 @@ export const runUploadSchema = z.object({
   operator: z.preprocess(blank, z.string().trim().max(80, "at most 80 characters").optional()),
   notes: z.preprocess(blank, z.string().trim().max(2000, "at most 2000 characters").optional()),
 });
-export type RunUploadInput = z.infer<typeof runUploadSchema>;
+export type RunUploadInput = Partial<z.infer<typeof runUploadSchema>>;
 
 export const RUN_SORTS = ["runAt", "-runAt", "deltaTPeak", "-deltaTPeak", "windowUse", "-windowUse", "peakMin", "-peakMin", "criticalSpread", "-criticalSpread", "talMin", "-talMin"] as const;
 export type RunSort = (typeof RUN_SORTS)[number];
