@@ -10,6 +10,7 @@ import { signOutAction } from "./actions";
 
 function navFor(actor: Actor): { main: NavItem[]; admin: NavItem[] } {
   const main: NavItem[] = [{ href: "/fleet", label: "Fleet" }];
+  if (can(actor.role, "run.read")) main.push({ href: "/runs", label: "Runs" }, { href: "/windows", label: "Windows" }, { href: "/instruments", label: "Instruments" });
   const admin: NavItem[] = [];
   if (can(actor.role, "user.manage")) admin.push({ href: "/settings/people", label: "People" });
   if (can(actor.role, "site.manage")) admin.push({ href: "/settings/sites", label: "Sites and lines" });
