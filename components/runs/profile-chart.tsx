@@ -46,7 +46,7 @@ export function ProfileChart({ series, bands, phases, height = 360, compact = fa
   }, [series]);
   return (
     <figure className="space-y-2">
-      <div style={{ height }} aria-hidden="true">
+      <div style={{ height }} role="group" aria-label="Profile chart: probe temperatures over time (the table below holds the same data)">
         <ResponsiveContainer width="100%" height="100%">
           <LineChart data={data} margin={{ top: 8, right: 12, bottom: compact ? 0 : 8, left: 0 }}>
             <CartesianGrid stroke="#e2dbd0" strokeDasharray="3 3" />
@@ -85,7 +85,7 @@ export function ProfileChart({ series, bands, phases, height = 360, compact = fa
       </figcaption>
       <details className="text-sm">
         <summary className="min-h-11 cursor-pointer py-2 text-ink-soft">Show the profile as a table</summary>
-        <div className="max-h-80 overflow-auto">
+        <div className="max-h-80 overflow-auto" tabIndex={0} role="region" aria-label="Profile table">
           <table className="w-full text-right text-xs">
             <caption className="sr-only">Probe temperatures in °C by time in seconds</caption>
             <thead>

@@ -90,7 +90,7 @@ export function RunsTable({ timeZone, ovenId, ovens, windows, instruments, initi
         <div className="flex items-end"><a className="inline-flex min-h-11 w-full items-center justify-center rounded-lg border border-paper-line bg-paper-raised px-3 text-sm font-semibold hover:bg-paper-sunk" href={`/api/v1/runs/export.csv?${toQuery(filters)}`}>Export CSV</a></div>
       </form>
       {result.error ? <p role="alert" className="text-sm text-health-act">{(result.error as Error).message}</p> : null}
-      <div className="card overflow-x-auto">
+      <div className="card overflow-x-auto" tabIndex={0} role="region" aria-label="Runs table">
         <table className="w-full min-w-[52rem] text-sm">
           <caption className="sr-only">Verification runs, {total} in all; column headers sort</caption>
           <thead className="text-left text-xs text-ink-muted">
@@ -119,7 +119,7 @@ export function RunsTable({ timeZone, ovenId, ovens, windows, instruments, initi
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-t border-paper-line">
                 {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2 text-right first:text-left [&:nth-child(2)]:text-left">
+                  <td key={cell.id} className="whitespace-nowrap px-3 py-2 text-right first:text-left [&:nth-child(2)]:text-left">
                     <table.FlexRender cell={cell} />
                   </td>
                 ))}

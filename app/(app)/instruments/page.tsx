@@ -15,7 +15,7 @@ export default async function InstrumentsPage() {
   return (
     <>
       <PageHeader title="Instruments" subtitle="Loggers and probe sets, with their calibration: valid, due within 30 days, or lapsed." />
-      <div className="card overflow-x-auto">
+      <div className="card overflow-x-auto" tabIndex={0} role="region" aria-label="List">
         <table className="w-full min-w-[40rem] text-sm">
           <thead className="text-left text-xs text-ink-muted">
             <tr><th className="px-3 py-2">Instrument</th><th className="px-3 py-2">Kind</th><th className="px-3 py-2">Serial</th><th className="px-3 py-2 text-right">Skew s</th><th className="px-3 py-2">Calibration</th><th className="px-3 py-2">Due</th></tr>

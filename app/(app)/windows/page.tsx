@@ -23,7 +23,7 @@ export default async function WindowsPage() {
           </>
         }
       />
-      <div className="card overflow-x-auto">
+      <div className="card overflow-x-auto" tabIndex={0} role="region" aria-label="List">
         <table className="w-full min-w-[40rem] text-sm">
           <thead className="text-left text-xs text-ink-muted">
             <tr><th className="px-3 py-2">Name</th><th className="px-3 py-2">Version</th><th className="px-3 py-2 text-right">Peak °C</th><th className="px-3 py-2 text-right">TAL s</th><th className="px-3 py-2 text-right">ΔT max °C</th><th className="px-3 py-2">From preset</th></tr>

@@ -33,7 +33,7 @@ export default async function InstrumentPage({ params }: { params: Promise<{ ins
           <div key={k} className="flex justify-between gap-2 border-b border-paper-line py-1.5"><dt className="text-ink-muted">{k}</dt><dd className="num">{v}</dd></div>
         ))}
       </dl>
-      <section className="card mb-6 overflow-x-auto p-4">
+      <section className="card mb-6 overflow-x-auto p-4" tabIndex={0} aria-label="Calibrations">
         <h2 className="mb-2 font-semibold">Calibrations</h2>
         <table className="w-full min-w-[36rem] text-sm">
           <thead className="text-left text-xs text-ink-muted"><tr><th className="py-1">Calibrated</th><th>Due</th><th>By</th><th>Reference</th><th className="text-right">U (k=2) °C</th><th>Offsets °C</th><th>Certificate</th></tr></thead>

@@ -4,7 +4,7 @@ import type { RunChannelRow } from "@/db/schema/runs";
 
 export function ProbeTable({ channels, sitsOn }: { channels: RunChannelRow[]; sitsOn: Record<string, string> }) {
   return (
-    <div className="overflow-x-auto">
+    <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Metrics per probe">
       <table className="w-full min-w-[44rem] text-sm">
         <caption className="sr-only">Metrics per probe</caption>
         <thead className="text-left text-xs text-ink-muted">

@@ -36,7 +36,7 @@ export function MappingStep({ preview, mapping, onChange, confirmed, onConfirm, 
   const problems = mappingProblems(mapping);
   const needsConfirm = labels !== null && preview.mapping.source === "board-order";
   return (
-    <div className="space-y-4">
+    <div className="min-w-0 space-y-4">
       <p className="text-sm text-ink-soft">
         Read <span className="num">{preview.rows}</span> rows: time in <strong>{preview.timeColumn}</strong> ({preview.timeFormat}), {probeCols.length} probe columns
         {preview.units ? <> in {preview.units === "mixed" ? "mixed units" : preview.units === "mV" ? "millivolts" : `°${preview.units}`}</> : null}, separated by{" "}
@@ -49,7 +49,7 @@ export function MappingStep({ preview, mapping, onChange, confirmed, onConfirm, 
       </p>
       <fieldset className="space-y-2">
         <legend className="mb-1 text-sm font-semibold">Column → probe position</legend>
-        <ul className="grid gap-2 sm:grid-cols-2">
+        <ul className="grid gap-2">
           {probeCols.map((c, i) => (
             <li key={c.name} className="flex items-center gap-2">
               <span aria-hidden="true" className="inline-block h-3 w-3 shrink-0 rounded-sm" style={{ background: probeColour(i) }} />
@@ -58,7 +58,7 @@ export function MappingStep({ preview, mapping, onChange, confirmed, onConfirm, 
                 id={`map-${c.name}`}
                 value={mapping[c.name] ?? ""}
                 onChange={(e) => onChange(c.name, e.target.value)}
-                className="min-h-11 flex-1 rounded-lg border border-paper-line bg-paper-raised px-2 text-sm"
+                className="min-h-11 min-w-0 flex-1 rounded-lg border border-paper-line bg-paper-raised px-2 text-sm"
               >
                 <option value="">not used</option>
                 {labels
@@ -84,7 +84,7 @@ export function MappingStep({ preview, mapping, onChange, confirmed, onConfirm, 
       </fieldset>
       <details className="text-sm">
         <summary className="min-h-11 cursor-pointer py-2 text-ink-soft">First rows of the file</summary>
-        <div className="overflow-x-auto">
+        <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="First rows of the file">
           <table className="text-xs">
             <thead><tr>{preview.preview.header.map((h, i) => <th key={i} className="px-2 py-1 text-left">{h}</th>)}</tr></thead>
             <tbody className="num">{preview.preview.rows.map((r, k) => <tr key={k}>{r.map((c, i) => <td key={i} className="px-2 py-0.5">{c}</td>)}</tr>)}</tbody>

@@ -193,7 +193,7 @@ export function UploadWizard({ ovenId, ovenTag, operator, windows, boards, instr
           <div className="grid gap-4 lg:grid-cols-2">
             <MappingStep preview={preview} mapping={mapping} confirmed={confirmed} onConfirm={setConfirmed} serverProblem={serverMappingProblem}
               onChange={(col, label) => { setMapping((m) => ({ ...m, [col]: label })); setMappingEdited(true); }} />
-            <ProfileChart series={series} bands={preview.window.values} phases={null} height={240} compact />
+            <div className="min-w-0"><ProfileChart series={series} bands={preview.window.values} phases={null} height={240} compact /></div>
           </div>
         ) : <p className="text-sm text-ink-muted">The detected columns and a preview of the curves appear here once a file is read.</p>}
       </Step>

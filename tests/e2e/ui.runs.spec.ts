@@ -1,0 +1,107 @@
+import AxeBuilder from "@axe-core/playwright";
+import { expect, test, type Page } from "@playwright/test";
+import { signIn } from "./support";
+
+// A technician records runs from the oven page: the first file from a logger is mapped once; the
+// second needs no mapping. Laptop and phone widths (two projects), each with a board of its own
+// so each starts with a logger and board that have never been mapped.
+const FILE = "tests/fixtures/logger-files/generic-8ch.csv";
+const BOARD: Record<string, string> = { laptop: "TB-8 line test board", phone: "LC-8 lab coupon" };
+
+async function shot(page: Page, name: string, project: string) {
+  await page.screenshot({ path: `test-results/screenshots/${project}-runs-${name}.png`, fullPage: true });
+}
+
+async function axe(page: Page) {
+  const result = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
+  const serious = result.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
+  expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`)).toEqual([]);
+}
+
+async function openWizard(page: Page) {
+  await page.goto("/fleet");
+  await page.locator("main a", { hasText: "L1-RF1" }).first().click();
+  await expect(page).toHaveURL(/\/ovens\/\d+$/);
+  await page.getByRole("navigation", { name: "Oven sections" }).getByRole("link", { name: "Runs" }).click();
+  await expect(page).toHaveURL(/\/ovens\/\d+\/runs$/);
+  await page.getByRole("link", { name: "Record a run" }).click();
+  await expect(page.getByRole("heading", { name: /Record a verification run on L1-RF1/ })).toBeVisible();
+  await page.waitForLoadState("networkidle");
+}
+
+async function chooseAndUpload(page: Page, board: string) {
+  await page.getByLabel("Test board").selectOption({ label: board });
+  await page.getByLabel("Logger", { exact: true }).selectOption({ label: "Logger LG-3 (BW-LG-0630)" });
+  await page.locator("#logger-file").setInputFiles(FILE);
+  await expect(page.getByText("Column → probe position")).toBeVisible({ timeout: 20_000 });
+}
+
+async function expectRunPage(page: Page) {
+  await expect(page).toHaveURL(/\/runs\/\d+$/, { timeout: 20_000 });
+  await expect(page.getByRole("heading", { name: /L1-RF1 run/ })).toBeVisible();
+  await expect(page.getByText(/uses \d+ % of SAC305/)).toBeVisible();
+  await expect(page.locator("svg.recharts-surface").first()).toBeVisible();
+  await expect(page.getByRole("img", { name: /Board map of/ })).toBeVisible();
+  await expect(page.getByRole("heading", { name: "Per probe" })).toBeVisible();
+  await expect(page.getByText("Calibration valid").first()).toBeVisible();
+}
+
+test("a technician uploads a logger file, maps it once, and the second file needs no mapping", async ({ page }, info) => {
+  const board = BOARD[info.project.name] ?? BOARD.laptop;
+  await signIn(page, "technician");
+  await openWizard(page);
+
+  // First file: the columns are proposed in board order, and Save waits for a confirmation.
+  await chooseAndUpload(page, board);
+  await expect(page.getByText(/matched to the board's probe positions in order/)).toBeVisible();
+  const save = page.getByRole("button", { name: "Save run" });
+  await expect(save).toBeDisabled();
+  await expect(page.getByText(/Confirm the column mapping/)).toBeVisible();
+  await page.getByLabel("These columns are mapped to the right probe positions.").check();
+  await expect(save).toBeEnabled();
+  // A mistake is said next to the mapping, and Save waits until it is put right.
+  await page.getByLabel("TC2 (°C)").selectOption("P3");
+  await expect(page.getByRole("alert").filter({ hasText: "P3 is given to both TC2 and TC3" })).toBeVisible();
+  await expect(save).toBeDisabled();
+  await page.getByLabel("TC2 (°C)").selectOption("P2");
+  await page.getByText("Cold start").click();
+  await page.getByLabel("Zone set points (°C)").fill("Z1=120, Z2=150, Z3=165");
+  await expect(page.getByText(/In window|Near the edge|Out of window/).first()).toBeVisible();
+  await expect(save).toBeEnabled();
+  await shot(page, "wizard-first", info.project.name);
+  await save.click();
+  await expectRunPage(page);
+  await expect(page.getByText("Cold start")).toBeVisible();
+  await axe(page);
+  await shot(page, "run-page", info.project.name);
+
+  // Second file from the same logger and board: the remembered mapping is used as it is.
+  await openWizard(page);
+  await chooseAndUpload(page, board);
+  await expect(page.getByText(/were mapped to this board before/)).toBeVisible();
+  await expect(page.getByRole("button", { name: "Save run" })).toBeEnabled();
+  await shot(page, "wizard-second", info.project.name);
+  await page.getByRole("button", { name: "Save run" }).click();
+  await expectRunPage(page);
+});
+
+test("a viewer sees runs but cannot record one; the list filters and sorts on the server", async ({ page }, info) => {
+  await signIn(page, "viewer");
+  await page.goto("/runs");
+  await expect(page.getByRole("heading", { name: "Verification runs" })).toBeVisible();
+  await page.waitForLoadState("networkidle");
+  const rows = page.locator("main table tbody tr");
+  await expect(rows).toHaveCount(25);
+  const filters = page.getByRole("form", { name: "Filter runs" });
+  await filters.getByLabel("Oven").selectOption({ label: "LAB-B1" });
+  await filters.getByLabel("Verdict").selectOption({ label: "Out of window" });
+  await expect(page.getByText(/^\d+ runs · page 1 of \d+$/)).toBeVisible();
+  await expect(rows.first()).toContainText("LAB-B1");
+  await page.getByRole("button", { name: /ΔT °C/ }).click();
+  await expect(page.getByRole("columnheader", { name: /ΔT °C/ })).toHaveAttribute("aria-sort", /ascending|descending/);
+  await shot(page, "fleet-list", info.project.name);
+  const res = await page.request.get("/api/v1/ovens");
+  const oven = (await res.json()).items.find((o: { tag: string }) => o.tag === "L1-RF1");
+  await page.goto(`/ovens/${oven.id}/runs/new`);
+  await expect(page.getByRole("heading", { name: "Your role cannot open that page" })).toBeVisible();
+});
