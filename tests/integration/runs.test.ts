@@ -11,6 +11,7 @@ import { createWindow, updateWindow } from "@/db/queries/windows";
 import { createCalibration, createInstrument } from "@/db/queries/instruments";
 import { runChannels, runJudgements, runSamples, runs } from "@/db/schema/runs";
 import { storedFiles } from "@/db/schema/files";
+import { calibrations } from "@/db/schema/instruments";
 import { testBoards } from "@/db/schema/windows";
 import { ovens } from "@/db/schema/fleet";
 import { analyzeLoggerFile } from "@/lib/thermal/analyze";
@@ -181,5 +182,31 @@ describe("CSV export", () => {
     expect(line).toContain(`"'=HYPERLINK(""http://x.example"",""go"")"`);
     expect(line).toContain(",'@SUM(A1:A9),");
     expect(line).not.toMatch(/,[=+\-@]/);
+  });
+});
+
+describe("calibration certificates", () => {
+  // Magic bytes per the PNG spec (89 50 4E 47 0D 0A 1A 0A), PDF 1.7 §7.5.2 ("%PDF-"), JPEG SOI + marker (FF D8 FF).
+  const PNG = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]);
+  const PDF = new TextEncoder().encode("%PDF-1.4\n%%EOF\n");
+  const input = { performedAt: new Date("2026-02-01"), performedBy: "lab", reference: "dry-well", offsets: {} };
+  it("accepts PDF and PNG by their bytes, stores them by hash, and defaults the due date to a year later", async () => {
+    const logger = await createInstrument(t.db, { kind: "logger", name: "Cert logger", serial: "T-CERT-1", channelCount: 8, scanSkewSeconds: 0 }, engineer);
+    const a = await createCalibration(t.db, logger.id, input, engineer, { bytes: PNG });
+    const b = await createCalibration(t.db, logger.id, { ...input, performedAt: new Date("2026-03-01") }, engineer, { bytes: PDF });
+    expect(a.certificateSha256).toMatch(/^[0-9a-f]{64}$/);
+    expect(fs.existsSync(path.join(uploads, a.certificateSha256!.slice(0, 2), a.certificateSha256!))).toBe(true);
+    expect((await t.db.select().from(storedFiles).where(eq(storedFiles.sha256, b.certificateSha256!)))[0].mediaType).toBe("application/pdf");
+    // 2026 is not a leap year: 1 Feb 2026 + 365 days = 1 Feb 2027.
+    expect(a.dueAt.toISOString().slice(0, 10)).toBe("2027-02-01");
+  });
+  it("refuses a certificate that is not a PDF, PNG or JPEG (even if named .pdf), and one over 10 MB", async () => {
+    const logger = await createInstrument(t.db, { kind: "logger", name: "Cert logger 2", serial: "T-CERT-2", channelCount: 8, scanSkewSeconds: 0 }, engineer);
+    const fake = await createCalibration(t.db, logger.id, input, engineer, { bytes: new TextEncoder().encode("<html>not a pdf</html>") }).catch((e) => e);
+    expect(fake).toMatchObject({ code: "unsupported_file", status: 415 });
+    const big = new Uint8Array(10 * 1024 * 1024 + 1);
+    big.set(PDF);
+    expect(await createCalibration(t.db, logger.id, input, engineer, { bytes: big }).catch((e) => e)).toMatchObject({ code: "file_too_large", status: 413 });
+    expect(await t.db.$count(calibrations, eq(calibrations.instrumentId, logger.id))).toBe(0);
   });
 });
