@@ -90,7 +90,35 @@ export function RunsTable({ timeZone, ovenId, ovens, windows, instruments, initi
         <div className="flex items-end"><a className="inline-flex min-h-11 w-full items-center justify-center rounded-lg border border-paper-line bg-paper-raised px-3 text-sm font-semibold hover:bg-paper-sunk" href={`/api/v1/runs/export.csv?${toQuery(filters)}`}>Export CSV</a></div>
       </form>
       {result.error ? <p role="alert" className="text-sm text-health-act">{(result.error as Error).message}</p> : null}
-      <div className="card overflow-x-auto" tabIndex={0} role="region" aria-label="Runs table">
+      <div className="md:hidden">
+        <label className="text-xs text-ink-muted">Sort by
+          <select className={control} value={`${sorting[0]?.desc ? "-" : ""}${sorting[0]?.id ?? "runAt"}`} onChange={(e) => { const v = e.target.value; setSorting([{ id: v.replace(/^-/, ""), desc: v.startsWith("-") }]); setPagination((p) => ({ ...p, pageIndex: 0 })); }}>
+            <option value="-runAt">Newest first</option>
+            <option value="runAt">Oldest first</option>
+            <option value="-deltaTPeak">Largest ΔT first</option>
+            <option value="-windowUse">Most window used first</option>
+            <option value="-criticalSpread">Largest critical spread first</option>
+            <option value="talMin">Shortest TAL first</option>
+          </select>
+        </label>
+        <ul className={`mt-2 space-y-2 ${result.isFetching ? "opacity-60" : ""}`} aria-label="Runs">
+          {(result.data?.items ?? []).map((r) => (
+            <li key={r.id}>
+              <Link href={`/runs/${r.id}`} className="card flex min-h-11 flex-col gap-1 p-3">
+                <span className="flex items-center justify-between gap-2">
+                  <span className="font-medium">{ovenId ? "" : `${r.ovenTag} · `}{new Intl.DateTimeFormat("en-GB", { timeZone, day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" }).format(new Date(r.runAt))}</span>
+                  <VerdictBadge status={r.verdict} />
+                </span>
+                <span className="text-sm text-ink-soft">
+                  ΔT <span className="num">{fmt(r.deltaTPeak)}</span> <span className="unit">°C</span> · window use <span className="num">{fmt(r.windowUse, 0)}</span> % · TAL <span className="num">{fmt(r.talMin, 0)}</span> <span className="unit">s</span>
+                  {r.calibration === "lapsed" ? <> · <CalibrationBadge state="lapsed" label="calibration lapsed" /></> : null}
+                </span>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      </div>
+      <div className="card hidden overflow-x-auto md:block" tabIndex={0} role="region" aria-label="Runs table">
         <table className="w-full min-w-[52rem] text-sm">
           <caption className="sr-only">Verification runs, {total} in all; column headers sort</caption>
           <thead className="text-left text-xs text-ink-muted">

@@ -86,7 +86,7 @@ export default async function RunPage({ params }: { params: Promise<{ runId: str
         <Tile label="25 °C → peak" value={fmt(r.timeToPeakMax, 0)} unit="s" />
       </section>
 
-      <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+      <div className="grid gap-6 lg:grid-cols-[1fr_20rem] print:block">
         <div className="min-w-0 space-y-6">
           <section className="card p-4" aria-labelledby="profile-heading">
             <h2 id="profile-heading" className="mb-2 font-semibold">Profile</h2>
@@ -103,27 +103,6 @@ export default async function RunPage({ params }: { params: Promise<{ runId: str
               <p className="mt-3 text-xs text-ink-muted">Up to 90 % is in window; 90–100 % is near the edge; over 100 % is out. The line marks 90 %.</p>
             </section>
           </div>
-          <section className="card p-4" aria-labelledby="probes-heading">
-            <h2 id="probes-heading" className="mb-2 font-semibold">Per probe</h2>
-            <ProbeTable channels={d.channels} sitsOn={sitsOn} />
-            {r.warnings.length ? (
-              <ul className="mt-3 list-disc space-y-1 pl-5 text-xs text-ink-muted">{r.warnings.map((x) => <li key={x}>{x}</li>)}</ul>
-            ) : null}
-          </section>
-          {d.judgements.length ? (
-            <section className="card p-4" aria-labelledby="judgements-heading">
-              <h2 id="judgements-heading" className="mb-2 font-semibold">Re-judged</h2>
-              <ul className="space-y-2 text-sm">
-                {d.judgements.map((j) => (
-                  <li key={j.id} className="flex flex-wrap items-center gap-2">
-                    <VerdictBadge status={j.verdictStatus} windowUse={j.windowUse} />
-                    <span className="text-ink-soft">against window version {j.windowVersion ?? "built-in"}, {formatDateTime(j.createdAt, tz)}</span>
-                  </li>
-                ))}
-              </ul>
-            </section>
-          ) : null}
-          <SafetyNote kind="verdicts" />
         </div>
         <div className="space-y-4">
           <RunSidePanel d={d} timeZone={tz} />
@@ -141,6 +120,27 @@ export default async function RunPage({ params }: { params: Promise<{ runId: str
           ) : null}
         </div>
       </div>
+      <section className="card p-4" aria-labelledby="probes-heading">
+        <h2 id="probes-heading" className="mb-2 font-semibold">Per probe</h2>
+        <ProbeTable channels={d.channels} sitsOn={sitsOn} />
+        {r.warnings.length ? (
+          <ul className="mt-3 list-disc space-y-1 pl-5 text-xs text-ink-muted">{r.warnings.map((x) => <li key={x}>{x}</li>)}</ul>
+        ) : null}
+      </section>
+      {d.judgements.length ? (
+        <section className="card p-4" aria-labelledby="judgements-heading">
+          <h2 id="judgements-heading" className="mb-2 font-semibold">Re-judged</h2>
+          <ul className="space-y-2 text-sm">
+            {d.judgements.map((j) => (
+              <li key={j.id} className="flex flex-wrap items-center gap-2">
+                <VerdictBadge status={j.verdictStatus} windowUse={j.windowUse} />
+                <span className="text-ink-soft">against window version {j.windowVersion ?? "built-in"}, {formatDateTime(j.createdAt, tz)}</span>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
+      <SafetyNote kind="verdicts" />
     </article>
   );
 }
