@@ -21,7 +21,7 @@ async function axe(page: Page) {
 async function openWizard(page: Page) {
   await page.goto("/fleet");
   await page.locator("main a", { hasText: "L1-RF1" }).first().click();
-  await expect(page).toHaveURL(/\/ovens\/\d+$/);
+  await expect(page).toHaveURL(/\/ovens\/\d+\/health$/);
   await page.getByRole("navigation", { name: "Oven sections" }).getByRole("link", { name: "Runs" }).click();
   await expect(page).toHaveURL(/\/ovens\/\d+\/runs$/);
   await page.getByRole("link", { name: "Record a run" }).click();

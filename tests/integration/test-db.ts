@@ -15,7 +15,7 @@ import type { Role } from "@/db/schema/users";
  */
 function templateKey(): string {
   const h = crypto.createHash("sha256");
-  for (const folder of ["db/migrations", "db/seed"]) {
+  for (const folder of ["db/migrations", "db/seed", "db/schema", "db/queries", "lib/thermal"]) {
     for (const f of fs.readdirSync(path.join(process.cwd(), folder), { recursive: true }).map(String).sort()) {
       const p = path.join(process.cwd(), folder, f);
       if (fs.statSync(p).isFile()) h.update(f).update(fs.readFileSync(p));
