@@ -114,3 +114,39 @@ test("a viewer sees runs but cannot record one; the list filters and sorts on th
   await page.goto(`/ovens/${oven.id}/runs/new`);
   await expect(page.getByRole("heading", { name: "Your role cannot open that page" })).toBeVisible();
 });
+
+test("an engineer makes a window from a preset, edits it into version 2, and sees instruments and setup", async ({ page }, info) => {
+  await signIn(page, "engineer");
+  await page.goto("/windows");
+  await expect(page.getByRole("link", { name: "SAC305 — Brightwater standard" })).toBeVisible();
+  await page.getByRole("link", { name: "New window" }).click();
+  await page.waitForLoadState("networkidle");
+  const name = `Sn63Pb37 trial ${info.project.name} ${Date.now().toString(36)}`;
+  await page.getByLabel("Start from preset").selectOption({ label: "Sn63Pb37 paste, typical window" });
+  await expect(page.getByLabel("Liquidus (°C)")).toHaveValue("183");
+  await page.getByLabel("Name").fill(name);
+  await page.getByLabel("Peak, highest (°C)").fill("200");
+  await page.getByRole("button", { name: "Create window" }).click();
+  // Said beside the field: the highest peak must exceed the lowest.
+  await expect(page.getByText(/peakMax \(200 °C\) must be greater than peakMin \(220 °C\)/)).toBeVisible();
+  await page.getByLabel("Peak, highest (°C)").fill("235");
+  await page.getByRole("button", { name: "Create window" }).click();
+  await expect(page).toHaveURL(/\/windows\/\d+$/);
+  await expect(page.getByText(/^Version 1/)).toBeVisible();
+  await page.waitForLoadState("networkidle");
+  await page.getByLabel("ΔT at peak, most (°C)").fill("8");
+  await page.getByRole("button", { name: "Save as a new version" }).click();
+  await expect(page.getByText(/Saved as version 2/)).toBeVisible();
+  await shot(page, "window-edit", info.project.name);
+  await page.goto("/instruments");
+  await expect(page.getByText("Calibration due within 30 days")).toBeVisible();
+  await shot(page, "instruments", info.project.name);
+  await page.goto("/windows/boards");
+  await expect(page.getByRole("img", { name: /Outline of TB-8 line test board/ })).toBeVisible();
+  await shot(page, "boards", info.project.name);
+  const res = await page.request.get("/api/v1/ovens");
+  const oven = (await res.json()).items.find((o: { tag: string }) => o.tag === "LAB-B1");
+  await page.goto(`/ovens/${oven.id}/setup`);
+  await expect(page.getByLabel("Default process window")).toBeVisible();
+  await shot(page, "setup", info.project.name);
+});
