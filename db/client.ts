@@ -6,8 +6,12 @@ import * as fleet from "./schema/fleet";
 import * as audit from "./schema/audit";
 import * as mail from "./schema/mail";
 import * as changes from "./schema/changes";
+import * as files from "./schema/files";
+import * as windows from "./schema/windows";
+import * as instruments from "./schema/instruments";
+import * as runs from "./schema/runs";
 
-export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail, ...changes };
+export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail, ...changes, ...files, ...windows, ...instruments, ...runs };
 export type Db = LibSQLDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 export type DbOrTx = Db | Tx;

@@ -18,17 +18,26 @@ export const PERMISSIONS = [
   "subscription.manage.own",
   "subscription.manage.team",
   "outbox.manage",
+  "run.read",
+  "run.create",
+  "run.rejudge",
+  "run.delete",
+  "window.manage",
+  "board.manage",
+  "instrument.manage",
 ] as const;
 export type Permission = (typeof PERMISSIONS)[number];
 
-const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze", "change.read", "subscription.manage.own"];
+const READ: Permission[] = ["fleet.read", "oven.read", "profile.analyze", "change.read", "subscription.manage.own", "run.read"];
+// Engineers look after the measurement: windows, boards, instruments, calibrations, re-judging and deleting runs.
+const MEASUREMENT: Permission[] = ["run.create", "run.rejudge", "run.delete", "window.manage", "board.manage", "instrument.manage"];
 
 export const ROLE_PERMISSIONS: Record<Role, readonly Permission[]> = {
   viewer: READ,
-  technician: READ,
-  engineer: [...READ, "oven.create", "oven.update", "change.create"],
-  manager: [...READ, "oven.create", "oven.update", "audit.read", "subscription.manage.team"],
-  admin: [...READ, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read", "subscription.manage.team", "outbox.manage"],
+  technician: [...READ, "run.create"],
+  engineer: [...READ, ...MEASUREMENT, "oven.create", "oven.update", "change.create"],
+  manager: [...READ, ...MEASUREMENT, "oven.create", "oven.update", "audit.read", "subscription.manage.team"],
+  admin: [...READ, ...MEASUREMENT, "oven.create", "oven.update", "oven.retire", "site.manage", "user.manage", "token.manage", "audit.read", "mail.sink.read", "subscription.manage.team", "outbox.manage"],
 };
 
 export function can(role: Role, permission: Permission): boolean {

@@ -10,6 +10,7 @@ import { signOutAction } from "./actions";
 
 function navFor(actor: Actor): { main: NavItem[]; admin: NavItem[] } {
   const main: NavItem[] = [{ href: "/fleet", label: "Fleet" }];
+  if (can(actor.role, "run.read")) main.push({ href: "/runs", label: "Runs" }, { href: "/windows", label: "Windows" }, { href: "/instruments", label: "Instruments" });
   if (can(actor.role, "change.read")) main.push({ href: "/changes", label: "Changes" });
   if (can(actor.role, "subscription.manage.own")) main.push({ href: "/settings/notifications", label: "E-mail settings" });
   const admin: NavItem[] = [];

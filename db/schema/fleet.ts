@@ -1,4 +1,5 @@
 import { integer, sqliteTable, text, index, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { processWindows, testBoards } from "./windows";
 
 export const sites = sqliteTable(
   "site",
@@ -45,6 +46,8 @@ export const ovens = sqliteTable(
     installedOn: text("installed_on"),
     serviceState: text("service_state", { enum: SERVICE_STATES }).notNull().default("in_service"),
     notes: text("notes"),
+    defaultWindowId: integer("default_window_id").references(() => processWindows.id),
+    defaultBoardId: integer("default_board_id").references(() => testBoards.id),
     createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
     updatedAt: integer("updated_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
   },
@@ -52,6 +55,8 @@ export const ovens = sqliteTable(
     uniqueIndex("oven_tag_unique").on(t.tag),
     index("oven_line_idx").on(t.lineId),
     index("oven_state_idx").on(t.serviceState),
+    index("oven_default_window_idx").on(t.defaultWindowId),
+    index("oven_default_board_idx").on(t.defaultBoardId),
   ],
 );
 

@@ -5,13 +5,14 @@ import { lines, ovens, sites } from "../schema/fleet";
 import { users } from "../schema/users";
 import { DEMO_LINES, DEMO_OVENS, DEMO_SITE, DEMO_USERS } from "./demo-plant";
 import { seedMail } from "./seed-mail";
+import { seedRuns } from "./seed-runs";
 
 /**
  * Seeds the demo plant. Idempotent: every row is looked up by its natural key first and left
  * alone when present, so a second run changes nothing.
  */
 export async function seedDemo(db: Db, { password, now = new Date() }: { password: string; now?: Date }) {
-  const counts = { users: 0, sites: 0, lines: 0, ovens: 0, subscriptions: 0 };
+  const counts = { users: 0, sites: 0, lines: 0, ovens: 0, subscriptions: 0, runs: 0 };
   await db.transaction(async (tx) => {
     for (const u of DEMO_USERS) {
       const [found] = await tx.select({ id: users.id }).from(users).where(eq(users.email, u.email)).limit(1);
@@ -42,5 +43,6 @@ export async function seedDemo(db: Db, { password, now = new Date() }: { passwor
     }
   });
   counts.subscriptions = (await seedMail(db, { now })).subscriptions;
+  counts.runs = (await seedRuns(db, { now })).runs;
   return counts;
 }

@@ -2,7 +2,7 @@ import { alignChannels, applyOffsets } from "./align";
 import type { LoggerFileInput } from "./decode";
 import { invalidOptions } from "./errors";
 import type { ThermocoupleType } from "./its90";
-import { computeMetrics } from "./metrics";
+import { computeMetrics, type MetricSeries } from "./metrics";
 import { parseLoggerFile } from "./parse-logger-file";
 import type { AnalysisResult } from "./types";
 import type { TemperatureUnit } from "./units";
@@ -63,6 +63,11 @@ export function medianInterval(time: ArrayLike<number>): number {
  * Anything wrong with the file or the options is a ThermalFileError.
  */
 export function analyzeLoggerFile(input: LoggerFileInput, options: AnalyzeOptions = {}): AnalysisResult {
+  return analyzeWithSeries(input, options).result;
+}
+
+/** The same analysis, also handing back the aligned, corrected curves (for storing a run). */
+export function analyzeWithSeries(input: LoggerFileInput, options: AnalyzeOptions = {}): { result: AnalysisResult; series: MetricSeries } {
   const window = checkedWindow(options.window);
   const skewSeconds = options.skewSeconds ?? 0;
   if (typeof skewSeconds !== "number" || !(Math.abs(skewSeconds) <= MAX_SKEW_SECONDS)) {
@@ -106,5 +111,5 @@ export function analyzeLoggerFile(input: LoggerFileInput, options: AnalyzeOption
     result.meta.thermocouple = options.thermocouple ?? "K";
     result.meta.coldJunctionC = options.coldJunctionC ?? 0;
   }
-  return result;
+  return { result, series: { time: aligned.time, channels: aligned.channels } };
 }

@@ -1,12 +1,13 @@
 import fs from "node:fs";
 import { expect, test } from "@playwright/test";
-import { ROUTE_MATRIX, WHO, type Who } from "../matrix/routes";
+import { ROUTE_MATRIX, WHO, type MatrixIds, type Who } from "../matrix/routes";
 import { createTokenWithCli, USERS } from "./support";
 
 // Every route handler as every role, with bearer tokens made by the operators' CLI.
 const tokens: Partial<Record<Who, string>> = {};
 let ovenId = 0;
 let lineId = 0;
+let ids: MatrixIds;
 
 test.beforeAll(async ({ request }) => {
   for (const role of Object.keys(USERS) as (keyof typeof USERS)[]) tokens[role] = createTokenWithCli(USERS[role], `matrix-${role}`);
@@ -15,14 +16,27 @@ test.beforeAll(async ({ request }) => {
   const target = body.items.find((o: { tag: string }) => o.tag === "LAB-B2");
   ovenId = target.id;
   lineId = target.line.id;
+  // Seeded records for the routes that act on one: the newest run keeps its file; older ones may be deleted.
+  const get = async (path: string) => (await request.get(path, { headers: { authorization: `Bearer ${tokens.viewer}` } })).json();
+  const runs = (await get(`/api/v1/runs?ovenId=${ovenId}&pageSize=20&sort=-runAt`)).items as { id: number }[];
+  const instruments = (await get("/api/v1/instruments")).items as { id: number; kind: string }[];
+  const calibrated = await Promise.all(instruments.map(async (i) => ({ i, cals: (await get(`/api/v1/instruments/${i.id}/calibrations`)).items as { id: number; certificate: boolean }[] })));
+  ids = {
+    runId: runs[0].id,
+    deletableRunIds: runs.slice(10).map((r) => r.id),
+    windowId: (await get("/api/v1/windows")).items[0].id,
+    boardId: (await get("/api/v1/boards")).items[0].id,
+    instrumentId: instruments.find((i) => i.kind === "logger")!.id,
+    certificateCalibrationId: calibrated.flatMap((x) => x.cals).find((c) => c.certificate)!.id,
+  };
 });
 
 for (const route of ROUTE_MATRIX) {
   for (const who of WHO) {
     const expected = route.expect[who];
-    test(`${route.method} ${typeof route.path === "string" ? route.path : route.path({ ovenId: 0, unique: "x" })} as ${who} → ${expected}`, async ({ request }) => {
+    test(`${route.method} ${typeof route.path === "string" ? route.path : route.path({ ovenId: 0, unique: "x", lineId: 0, who, ids: { runId: 0, deletableRunIds: [0, 0, 0, 0, 0, 0], windowId: 0, boardId: 0, instrumentId: 0, certificateCalibrationId: 0 } })} as ${who} → ${expected}`, async ({ request }) => {
       const unique = `${who.slice(0, 3).toUpperCase()}${Date.now().toString(36).slice(-5).toUpperCase()}`;
-      const ctx = { ovenId, unique, lineId };
+      const ctx = { ovenId, unique, lineId, who, ids };
       const path = typeof route.path === "string" ? route.path : route.path(ctx);
       const headers: Record<string, string> = who === "anonymous" ? {} : { authorization: `Bearer ${tokens[who]}` };
       const multipart = route.multipart

@@ -4,6 +4,7 @@ import "@/lib/actions/ovens";
 import "@/lib/actions/admin";
 import "@/lib/actions/changes";
 import "@/lib/actions/mail";
+import "@/lib/actions/measurement";
 import { ROLES, type Role } from "@/db/schema/users";
 import { can } from "@/lib/permissions";
 import { ACTION_INPUTS } from "../matrix/actions";

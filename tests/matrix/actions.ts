@@ -1,4 +1,7 @@
-import { eq } from "drizzle-orm";
+import { and, asc, eq, isNull } from "drizzle-orm";
+import { processWindows, testBoards } from "@/db/schema/windows";
+import { instruments } from "@/db/schema/instruments";
+import { runs } from "@/db/schema/runs";
 import type { Db } from "@/db/client";
 import { lines, ovens } from "@/db/schema/fleet";
 import { users } from "@/db/schema/users";
@@ -29,6 +32,19 @@ async function userId(db: Db, email: string) {
 }
 
 const ownEmail = (role: Role) => (role === "technician" ? "tech@brightwater.example" : `${role}@brightwater.example`);
+async function firstId(db: Db, table: typeof processWindows | typeof testBoards | typeof instruments) {
+  const [row] = await db.select({ id: table.id }).from(table).limit(1);
+  return String(row.id);
+}
+/** A live run of LAB-B2, the oldest first, so each allowed role deletes a different one. */
+async function liveRun(db: Db) {
+  const [r] = await db.select({ id: runs.id }).from(runs).where(and(eq(runs.ovenId, Number(await anyOven(db))), isNull(runs.deletedAt))).orderBy(asc(runs.id)).limit(1);
+  return String(r.id);
+}
+const SAC305_FIELDS = {
+  liquidus: "217", peakMin: "235", peakMax: "245", talMin: "50", talMax: "70", soakStart: "150", soakEnd: "200", soakMin: "60", soakMax: "120",
+  rampUpMax: "3", rampDownMax: "4", rampWindow: "10", heatUpFrom: "50", heatUpTo: "150", deltaTMax: "10", timeToPeakMax: "480",
+};
 
 export const ACTION_INPUTS: Record<string, (db: Db, role: Role) => Promise<Record<string, unknown>>> = {
   createOven: async (db) => ({ tag: `A-${uid()}`, name: "Action oven", lineId: String(await anyLine(db)), kind: "convection", zones: "8" }),
@@ -49,6 +65,16 @@ export const ACTION_INPUTS: Record<string, (db: Db, role: Role) => Promise<Recor
     const [row] = await db.insert(outbox).values({ kind: "fleet_digest", to: "viewer@brightwater.example", subject: "m", html: "<p>m</p>", text: "m", headers: {}, idempotencyKey: key, state: "dead", nextAttemptAt: new Date(), createdAt: new Date() }).returning();
     return { outboxId: String(row.id) };
   },
+  createWindow: async () => ({ name: `Window ${uid()}`, presetId: "sac305-typical", ...SAC305_FIELDS }),
+  updateWindow: async (db) => ({ windowId: await firstId(db, processWindows), name: `Window ${uid()}`, ...SAC305_FIELDS, deltaTMax: "9" }),
+  createBoard: async () => ({ name: `Board ${uid()}`, widthMm: "120", heightMm: "80", probes: JSON.stringify([{ label: "P1", x: 10, y: 10, sitsOn: "edge" }]) }),
+  updateBoard: async (db) => ({ boardId: await firstId(db, testBoards), notes: `edited ${uid()}` }),
+  createInstrument: async () => ({ kind: "logger", name: `Logger ${uid()}`, serial: `SN-${uid()}`, channelCount: "8", scanSkewSeconds: "0.05" }),
+  updateInstrument: async (db) => ({ instrumentId: await firstId(db, instruments), notes: `edited ${uid()}` }),
+  createCalibration: async (db) => ({ instrumentId: await firstId(db, instruments), performedAt: "2026-02-01", performedBy: "Kestrel Metrology", reference: "dry-well", offsets: '{"1": 0.1}' }),
+  setOvenDefaults: async (db) => ({ ovenId: String(await anyOven(db)), defaultWindowId: await firstId(db, processWindows), defaultBoardId: await firstId(db, testBoards) }),
+  rejudgeRun: async (db) => ({ runId: await liveRun(db) }),
+  deleteRun: async (db) => ({ runId: await liveRun(db) }),
   createSite: async () => ({ name: `Site ${uid()}`, timeZone: "America/Chicago" }),
   createLine: async (db) => {
     const [l] = await db.select().from(lines).limit(1);

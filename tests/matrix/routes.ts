@@ -4,12 +4,16 @@
 export type Who = "anonymous" | "viewer" | "technician" | "engineer" | "manager" | "admin";
 export const WHO: Who[] = ["anonymous", "viewer", "technician", "engineer", "manager", "admin"];
 
+/** Seeded records the spec looks up before calling the routes (see api.matrix.spec.ts). */
+export type MatrixIds = { runId: number; deletableRunIds: number[]; windowId: number; boardId: number; instrumentId: number; certificateCalibrationId: number };
+export type MatrixCtx = { ovenId: number; unique: string; lineId: number; who: Who; ids: MatrixIds };
+
 export type RouteCase = {
   method: "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
   /** The file under app/ that handles it. */
   file: string;
-  path: string | ((ctx: { ovenId: number; unique: string }) => string);
-  body?: (ctx: { ovenId: number; unique: string; lineId: number }) => unknown;
+  path: string | ((ctx: MatrixCtx) => string);
+  body?: (ctx: MatrixCtx) => unknown;
   multipart?: "logger-file";
   expect: Record<Who, number>;
 };
@@ -17,7 +21,46 @@ export type RouteCase = {
 const all = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: ok, technician: ok, engineer: ok, manager: ok, admin: ok });
 const adminOnly = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: 403, technician: 403, engineer: 403, manager: 403, admin: ok });
 const everyone = (status: number): Record<Who, number> => ({ anonymous: status, viewer: status, technician: status, engineer: status, manager: status, admin: status });
+const technicianUp = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: 403, technician: ok, engineer: ok, manager: ok, admin: ok });
 const engineerUp = (ok: number): Record<Who, number> => ({ anonymous: 401, viewer: 403, technician: 403, engineer: ok, manager: ok, admin: ok });
+
+const SAC305 = {
+  liquidus: 217, peakMin: 235, peakMax: 245, talMin: 50, talMax: 70, soakStart: 150, soakEnd: 200, soakMin: 60, soakMax: 120,
+  rampUpMax: 3, rampDownMax: 4, rampWindow: 10, heatUpFrom: 50, heatUpTo: 150, deltaTMax: 10, timeToPeakMax: 480,
+};
+const v1 = "app/api/v1";
+// Verification runs, process windows, test boards, instruments and calibrations.
+const RUN_ROUTES: RouteCase[] = [
+  { method: "POST", file: `${v1}/ovens/[ovenId]/runs/route.ts`, path: ({ ovenId }) => `/api/v1/ovens/${ovenId}/runs`, multipart: "logger-file", expect: technicianUp(201) },
+  { method: "POST", file: `${v1}/ovens/[ovenId]/runs/preview/route.ts`, path: ({ ovenId }) => `/api/v1/ovens/${ovenId}/runs/preview`, multipart: "logger-file", expect: technicianUp(200) },
+  { method: "GET", file: `${v1}/runs/route.ts`, path: ({ ovenId }) => `/api/v1/runs?ovenId=${ovenId}&verdict=pass&pageSize=5`, expect: all(200) },
+  { method: "GET", file: `${v1}/runs/export.csv/route.ts`, path: ({ ovenId }) => `/api/v1/runs/export.csv?ovenId=${ovenId}`, expect: all(200) },
+  { method: "GET", file: `${v1}/runs/[runId]/route.ts`, path: ({ ids }) => `/api/v1/runs/${ids.runId}`, expect: all(200) },
+  { method: "GET", file: `${v1}/runs/[runId]/file/route.ts`, path: ({ ids }) => `/api/v1/runs/${ids.runId}/file`, expect: all(200) },
+  { method: "POST", file: `${v1}/runs/[runId]/rejudge/route.ts`, path: ({ ids }) => `/api/v1/runs/${ids.runId}/rejudge`, body: () => ({}), expect: engineerUp(201) },
+  { method: "DELETE", file: `${v1}/runs/[runId]/route.ts`, path: ({ ids, who }) => `/api/v1/runs/${ids.deletableRunIds[WHO.indexOf(who)]}`, expect: engineerUp(200) },
+  { method: "GET", file: `${v1}/windows/route.ts`, path: "/api/v1/windows", expect: all(200) },
+  { method: "POST", file: `${v1}/windows/route.ts`, path: "/api/v1/windows", body: ({ unique }) => ({ name: `W-${unique}`, presetId: "sac305-typical", values: SAC305 }), expect: engineerUp(201) },
+  { method: "GET", file: `${v1}/windows/[windowId]/route.ts`, path: ({ ids }) => `/api/v1/windows/${ids.windowId}`, expect: all(200) },
+  { method: "PATCH", file: `${v1}/windows/[windowId]/route.ts`, path: ({ ids }) => `/api/v1/windows/${ids.windowId}`, body: ({ unique }) => ({ notes: `matrix ${unique}` }), expect: engineerUp(200) },
+  { method: "GET", file: `${v1}/boards/route.ts`, path: "/api/v1/boards", expect: all(200) },
+  {
+    method: "POST", file: `${v1}/boards/route.ts`, path: "/api/v1/boards",
+    body: ({ unique }) => ({ name: `B-${unique}`, widthMm: 100, heightMm: 80, probes: [{ label: "P1", x: 10, y: 10, sitsOn: "edge" }] }), expect: engineerUp(201),
+  },
+  { method: "GET", file: `${v1}/boards/[boardId]/route.ts`, path: ({ ids }) => `/api/v1/boards/${ids.boardId}`, expect: all(200) },
+  { method: "PATCH", file: `${v1}/boards/[boardId]/route.ts`, path: ({ ids }) => `/api/v1/boards/${ids.boardId}`, body: ({ unique }) => ({ notes: `matrix ${unique}` }), expect: engineerUp(200) },
+  { method: "GET", file: `${v1}/instruments/route.ts`, path: "/api/v1/instruments", expect: all(200) },
+  { method: "POST", file: `${v1}/instruments/route.ts`, path: "/api/v1/instruments", body: ({ unique }) => ({ kind: "logger", name: `I-${unique}`, serial: `S-${unique}`, channelCount: 8 }), expect: engineerUp(201) },
+  { method: "GET", file: `${v1}/instruments/[instrumentId]/route.ts`, path: ({ ids }) => `/api/v1/instruments/${ids.instrumentId}`, expect: all(200) },
+  { method: "PATCH", file: `${v1}/instruments/[instrumentId]/route.ts`, path: ({ ids }) => `/api/v1/instruments/${ids.instrumentId}`, body: ({ unique }) => ({ notes: `matrix ${unique}` }), expect: engineerUp(200) },
+  { method: "GET", file: `${v1}/instruments/[instrumentId]/calibrations/route.ts`, path: ({ ids }) => `/api/v1/instruments/${ids.instrumentId}/calibrations`, expect: all(200) },
+  {
+    method: "POST", file: `${v1}/instruments/[instrumentId]/calibrations/route.ts`, path: ({ ids }) => `/api/v1/instruments/${ids.instrumentId}/calibrations`,
+    body: () => ({ performedAt: "2026-01-10", performedBy: "Matrix Metrology", reference: "dry-well", offsets: { "1": 0.1 } }), expect: engineerUp(201),
+  },
+  { method: "GET", file: `${v1}/calibrations/[calibrationId]/certificate/route.ts`, path: ({ ids }) => `/api/v1/calibrations/${ids.certificateCalibrationId}/certificate`, expect: all(200) },
+];
 
 export const ROUTE_MATRIX: RouteCase[] = [
   { method: "GET", file: "app/api/health/route.ts", path: "/api/health", expect: { anonymous: 200, viewer: 200, technician: 200, engineer: 200, manager: 200, admin: 200 } },
@@ -60,6 +103,7 @@ export const ROUTE_MATRIX: RouteCase[] = [
   { method: "POST", file: "app/api/cron/tick/route.ts", path: "/api/cron/tick", expect: everyone(401) },
   { method: "POST", file: "app/api/unsubscribe/route.ts", path: "/api/unsubscribe", expect: everyone(400) },
   { method: "GET", file: "app/(app)/dev/mail/preview/[template]/route.ts", path: "/dev/mail/preview/fleet-digest", expect: adminOnly(200) },
+  ...RUN_ROUTES,
 ];
 
 /** Route files that are not Ovenward's API but the sign-in library's own endpoints. */

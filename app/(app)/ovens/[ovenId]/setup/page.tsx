@@ -2,8 +2,13 @@ import { loadOvenForPage } from "@/db/queries/oven-page";
 import { OVEN_KIND_LABELS, SERVICE_STATE_LABELS } from "@/lib/validation/oven";
 import { formatDateTime } from "@/lib/format";
 import { currentConfiguration } from "@/db/queries/changes";
-import { getDb } from "@/db";
 import { CHANGE_AREA_LABELS } from "@/lib/validation/change";
+import { getDb } from "@/db";
+import { runChoices } from "@/db/queries/run-options";
+import { getActor } from "@/lib/session";
+import { can } from "@/lib/permissions";
+import Link from "next/link";
+import { OvenDefaultsForm } from "./defaults-form";
 
 export const metadata = { title: "Setup" };
 
@@ -18,7 +23,9 @@ function Row({ label, value }: { label: string; value: React.ReactNode }) {
 
 export default async function OvenSetup({ params }: { params: Promise<{ ovenId: string }> }) {
   const { oven, line, site } = await loadOvenForPage((await params).ovenId);
-  const config = await currentConfiguration(await getDb(), oven.id);
+  const [choices, actor, config] = await Promise.all([runChoices(await getDb()), getActor(), currentConfiguration(await getDb(), oven.id)]);
+  const windowName = choices.windows.find((w) => w.id === oven.defaultWindowId)?.label ?? "built-in SAC305 window";
+  const boardName = choices.boards.find((b) => b.id === oven.defaultBoardId)?.label ?? null;
   return (
     <div className="grid gap-6 lg:grid-cols-2">
       <section className="card p-5" aria-labelledby="data-heading">
@@ -64,6 +71,18 @@ export default async function OvenSetup({ params }: { params: Promise<{ ovenId: 
           <p className="text-sm text-ink-muted">No change has been logged for {oven.tag} yet; its configuration is as delivered.</p>
         )}
         <p className="mt-3 text-xs text-ink-muted">Derived from the modification log: the latest value logged in each area.</p>
+      </section>
+      <section className="card p-5" aria-labelledby="runs-setup-heading">
+        <h2 id="runs-setup-heading" className="mb-2 font-semibold">
+          Verification runs
+        </h2>
+        <dl className="mb-4">
+          <Row label="Process window" value={oven.defaultWindowId ? <Link className="underline" href={`/windows/${oven.defaultWindowId}`}>{windowName}</Link> : windowName} />
+          <Row label="Test board" value={boardName} />
+        </dl>
+        {actor && can(actor.role, "window.manage") ? (
+          <OvenDefaultsForm ovenId={oven.id} windowId={oven.defaultWindowId} boardId={oven.defaultBoardId} windows={choices.windows} boards={choices.boards.map((b) => ({ id: b.id, label: b.label }))} />
+        ) : null}
       </section>
     </div>
   );
