@@ -5,8 +5,9 @@ import * as apiTokens from "./schema/api-tokens";
 import * as fleet from "./schema/fleet";
 import * as audit from "./schema/audit";
 import * as mail from "./schema/mail";
+import * as maintenance from "./schema/maintenance";
 
-export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail };
+export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail, ...maintenance };
 export type Db = LibSQLDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 export type DbOrTx = Db | Tx;

@@ -3,13 +3,14 @@ import { and, eq } from "drizzle-orm";
 import type { Db } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
 import { users } from "../schema/users";
+import { seedMaintenance } from "./seed-maintenance";
 import { DEMO_LINES, DEMO_OVENS, DEMO_SITE, DEMO_USERS } from "./demo-plant";
 
 /**
  * Seeds the demo plant. Idempotent: every row is looked up by its natural key first and left
  * alone when present, so a second run changes nothing.
  */
-export async function seedDemo(db: Db, { password }: { password: string }) {
+export async function seedDemo(db: Db, { password, now }: { password: string; now?: Date }) {
   const counts = { users: 0, sites: 0, lines: 0, ovens: 0 };
   await db.transaction(async (tx) => {
     for (const u of DEMO_USERS) {
@@ -40,5 +41,7 @@ export async function seedDemo(db: Db, { password }: { password: string }) {
       counts.ovens++;
     }
   });
+  // Plans, eighteen months of work orders and meter readings (idempotent on its own keys).
+  await seedMaintenance(db, { now });
   return counts;
 }

@@ -1,3 +1,4 @@
+import fs from "node:fs";
 import { expect, test } from "@playwright/test";
 import { ROUTE_MATRIX, WHO, type Who } from "../matrix/routes";
 import { createTokenWithCli, USERS } from "./support";
@@ -6,6 +7,10 @@ import { createTokenWithCli, USERS } from "./support";
 const tokens: Partial<Record<Who, string>> = {};
 let ovenId = 0;
 let lineId = 0;
+let workOrderId = 0;
+let planId = 0;
+let attachmentId = 0;
+const PNG = fs.readFileSync("tests/fixtures/checklist-photo.png");
 
 test.beforeAll(async ({ request }) => {
   for (const role of Object.keys(USERS) as (keyof typeof USERS)[]) tokens[role] = createTokenWithCli(USERS[role], `matrix-${role}`);
@@ -14,17 +19,29 @@ test.beforeAll(async ({ request }) => {
   const target = body.items.find((o: { tag: string }) => o.tag === "LAB-B2");
   ovenId = target.id;
   lineId = target.line.id;
+  const viewer = { authorization: `Bearer ${tokens.viewer}` };
+  const orders = await (await request.get(`/api/v1/work-orders?ovenId=${ovenId}&state=open&limit=1`, { headers: viewer })).json();
+  workOrderId = orders.items[0].id;
+  planId = (await (await request.get(`/api/v1/plans?ovenId=${ovenId}`, { headers: viewer })).json()).items[0].id;
+  const up = await request.post(`/api/v1/work-orders/${workOrderId}/attachments`, {
+    headers: { authorization: `Bearer ${tokens.technician}` },
+    multipart: { file: { name: "matrix.png", mimeType: "image/png", buffer: PNG } },
+  });
+  attachmentId = (await up.json()).id;
 });
 
 for (const route of ROUTE_MATRIX) {
   for (const who of WHO) {
     const expected = route.expect[who];
-    test(`${route.method} ${typeof route.path === "string" ? route.path : route.path({ ovenId: 0, unique: "x" })} as ${who} → ${expected}`, async ({ request }) => {
+    test(`${route.method} ${typeof route.path === "string" ? route.path : route.path({ ovenId: 0, unique: "x", lineId: 0, workOrderId: 0, planId: 0, attachmentId: 0, get: async () => ({}) })} as ${who} → ${expected}`, async ({ request }) => {
       const unique = `${who.slice(0, 3).toUpperCase()}${Date.now().toString(36).slice(-5).toUpperCase()}`;
-      const ctx = { ovenId, unique, lineId };
+      const get = async (p: string) => (await request.get(p, { headers: { authorization: `Bearer ${tokens.viewer}` } })).json();
+      const ctx = { ovenId, unique, lineId, workOrderId, planId, attachmentId, get };
       const path = typeof route.path === "string" ? route.path : route.path(ctx);
       const headers: Record<string, string> = who === "anonymous" ? {} : { authorization: `Bearer ${tokens[who]}` };
-      const res = await request.fetch(path, { method: route.method, headers, data: route.body ? route.body(ctx) : undefined });
+      const res = route.multipart === "png"
+        ? await request.fetch(path, { method: route.method, headers, multipart: { file: { name: "photo.png", mimeType: "image/png", buffer: PNG } } })
+        : await request.fetch(path, { method: route.method, headers, data: route.body ? await route.body(ctx) : undefined });
       expect(res.status(), await res.text()).toBe(expected);
       if (expected >= 400) {
         const body = await res.json();
