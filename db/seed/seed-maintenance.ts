@@ -1,4 +1,4 @@
-import { and, eq, inArray } from "drizzle-orm";
+import { and, eq, inArray, isNotNull } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
 import { users } from "../schema/users";
@@ -40,7 +40,8 @@ function templatesFor(tag: string, isLab: boolean): PmTemplate[] {
 }
 
 async function ensurePlans(tx: DbOrTx, oven: { id: number; tag: string; isLab: boolean; timeZone: string }, createdAt: Date, engineerId: string | null) {
-  const existing = await tx.select().from(maintenancePlans).where(eq(maintenancePlans.ovenId, oven.id));
+  // Only the seed's own plans (those made from a template); plans people added are theirs.
+  const existing = await tx.select().from(maintenancePlans).where(and(eq(maintenancePlans.ovenId, oven.id), isNotNull(maintenancePlans.templateId)));
   const have = new Set(existing.map((p) => p.templateId));
   const fresh = templatesFor(oven.tag, oven.isLab)
     .filter((t) => !have.has(t.id))
