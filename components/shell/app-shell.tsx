@@ -10,6 +10,11 @@ import { signOutAction } from "./actions";
 
 function navFor(actor: Actor): { main: NavItem[]; admin: NavItem[] } {
   const main: NavItem[] = [{ href: "/fleet", label: "Fleet" }];
+  if (can(actor.role, "workorder.update")) main.push({ href: "/my-work", label: "My work" });
+  if (can(actor.role, "maintenance.read")) {
+    main.push({ href: "/work-orders", label: "Work orders" }, { href: "/calendar", label: "Calendar" }, { href: "/plans", label: "Plans" });
+    main.push({ href: "/maintenance/kpis", label: "Maintenance KPIs" });
+  }
   const admin: NavItem[] = [];
   if (can(actor.role, "user.manage")) admin.push({ href: "/settings/people", label: "People" });
   if (can(actor.role, "site.manage")) admin.push({ href: "/settings/sites", label: "Sites and lines" });

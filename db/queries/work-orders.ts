@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, gte, inArray, lt, or, sql, type SQL } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
-import { ovens } from "../schema/fleet";
+import { lines, ovens, sites } from "../schema/fleet";
 import { users } from "../schema/users";
 import { workOrderParts, workOrders, type WorkOrderRow } from "../schema/maintenance";
 import { recordAudit } from "./audit";
@@ -33,6 +33,7 @@ const listColumns = {
   order: workOrders,
   ovenTag: ovens.tag,
   assigneeName: users.name,
+  timeZone: sites.timeZone,
 };
 
 /** A page of orders, overdue and soonest due first. */
@@ -43,6 +44,8 @@ export async function listWorkOrders(db: DbOrTx, f: Partial<WorkOrderFilter>, no
       .select(listColumns)
       .from(workOrders)
       .innerJoin(ovens, eq(ovens.id, workOrders.ovenId))
+      .innerJoin(lines, eq(lines.id, ovens.lineId))
+      .innerJoin(sites, eq(sites.id, lines.siteId))
       .leftJoin(users, eq(users.id, workOrders.assigneeId))
       .where(where)
       .orderBy(sql`${workOrders.dueAt} is null`, asc(workOrders.dueAt), asc(workOrders.id))
@@ -71,6 +74,7 @@ export function workOrderListJson(r: WorkOrderListRow) {
     priority: o.priority,
     ovenTag: r.ovenTag,
     assigneeName: r.assigneeName,
+    timeZone: r.timeZone,
     completedAt: o.completedAt?.toISOString() ?? null,
   };
 }
@@ -224,6 +228,8 @@ export async function listMyWork(db: DbOrTx, userId: string, now: Date, days = 7
     .select(listColumns)
     .from(workOrders)
     .innerJoin(ovens, eq(ovens.id, workOrders.ovenId))
+    .innerJoin(lines, eq(lines.id, ovens.lineId))
+    .innerJoin(sites, eq(sites.id, lines.siteId))
     .leftJoin(users, eq(users.id, workOrders.assigneeId))
     .where(
       and(
