@@ -36,8 +36,8 @@ function toQuery(f: Filters, offset: number) {
   return q.toString();
 }
 
-export function WorkOrderTable({ ovens, people, canAssign }: { ovens: { id: number; tag: string }[]; people: { id: string; name: string }[]; canAssign: boolean }) {
-  const [filters, setFilters] = useState(initial);
+export function WorkOrderTable({ ovens, people, canAssign, initialOvenId = "", initialOverdue = false }: { ovens: { id: number; tag: string }[]; people: { id: string; name: string }[]; canAssign: boolean; initialOvenId?: string; initialOverdue?: boolean }) {
+  const [filters, setFilters] = useState<Filters>({ ...initial, ovenId: initialOvenId, overdue: initialOverdue });
   const [offset, setOffset] = useState(0);
   const [rowSelection, setRowSelection] = useState<RowSelectionState>({});
   const [assignee, setAssignee] = useState("");
