@@ -221,9 +221,10 @@ export async function bulkAssign(db: Db, ids: number[], assigneeId: string | nul
   });
 }
 
-/** Orders for My work: assigned to me or to nobody, unfinished, due within `days`; overdue first. */
+/** Orders for My work: mine due within `days`, and nobody's due within a day or overdue. */
 export async function listMyWork(db: DbOrTx, userId: string, now: Date, days = 7) {
   const horizon = new Date(now.getTime() + days * 86_400_000);
+  const soon = new Date(now.getTime() + 86_400_000);
   return db
     .select(listColumns)
     .from(workOrders)
@@ -234,8 +235,12 @@ export async function listMyWork(db: DbOrTx, userId: string, now: Date, days = 7
     .where(
       and(
         inArray(workOrders.state, [...UNFINISHED]),
-        or(eq(workOrders.assigneeId, userId), sql`${workOrders.assigneeId} is null`),
-        or(lt(workOrders.dueAt, horizon), sql`${workOrders.dueAt} is null`),
+        or(
+          // Mine: anything due within `days` (or undated).
+          and(eq(workOrders.assigneeId, userId), or(lt(workOrders.dueAt, horizon), sql`${workOrders.dueAt} is null`)),
+          // Nobody's: only what is due within a day or already overdue, so the list stays short.
+          and(sql`${workOrders.assigneeId} is null`, lt(workOrders.dueAt, soon)),
+        ),
       ),
     )
     .orderBy(desc(sql`${workOrders.state} = 'in_progress'`), asc(workOrders.dueAt))

@@ -98,7 +98,7 @@ async function ensureOneOffs(tx: DbOrTx, byTag: Map<string, number>, now: Date, 
   const have = new Set((await tx.select({ title: workOrders.title }).from(workOrders).where(inArray(workOrders.title, titles))).map((r) => r.title));
   let n = 0;
   if (!have.has(BREAKDOWN_TITLE) && byTag.has("L1-RF1")) {
-    const failure = new Date(now.getTime() - 96 * DAY + 10.5 * 3_600_000);
+    const failure = new Date(now.getTime() - 96 * DAY - 1.5 * 3_600_000); // 10:30 UTC
     const [row] = await tx
       .insert(workOrders)
       .values({
@@ -116,10 +116,10 @@ async function ensureOneOffs(tx: DbOrTx, byTag: Map<string, number>, now: Date, 
     n++;
   }
   if (!have.has(DRIFT_TITLE) && byTag.has("L2-RF1")) {
-    const raised = new Date(now.getTime() - 2 * DAY + 9 * 3_600_000);
+    const raised = new Date(now.getTime() - 2 * DAY - 3 * 3_600_000);
     await tx.insert(workOrders).values({
       number: pendingNumber(), ovenId: byTag.get("L2-RF1")!, title: DRIFT_TITLE, kind: "drift_investigation", priority: "high", state: "open",
-      dueAt: new Date(now.getTime() + 5 * DAY + 9 * 3_600_000), assigneeId: ids.engineer, safetyLockout: true, touched: true,
+      dueAt: new Date(now.getTime() + 5 * DAY - 3 * 3_600_000), assigneeId: ids.engineer, safetyLockout: true, touched: true,
       notes: "EWMA of the critical-phase spread crossed its limit; projection reaches the window edge within weeks. Check blower bearings first.",
       checklist: [
         { id: "bearing", label: "Blower bearing noise and play checked", mandatory: true },
@@ -143,7 +143,7 @@ async function ensureMeters(tx: DbOrTx, ovenRows: { id: number; tag: string; isL
     for (let d = HISTORY_DAYS; d >= 1; d -= 7) {
       heater += Math.round(perDay * 7 * (0.85 + rand() * 0.3));
       cycles += o.isLab ? Math.round(20 + rand() * 15) : 0;
-      const at = new Date(now.getTime() - d * DAY + 8 * 3_600_000);
+      const at = new Date(now.getTime() - d * DAY - 4 * 3_600_000); // 08:00 UTC
       rows.push({ ovenId: o.id, kind: "heater_hours", value: heater, at });
       if (o.isLab) rows.push({ ovenId: o.id, kind: "cycles", value: cycles, at });
     }

@@ -11,7 +11,10 @@ const PHOTO = path.resolve("tests/fixtures/checklist-photo.png");
 // move only because of what the technician does. (The oldest overdue order is days old.)
 const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
 const KPI_URL = () => `/maintenance/kpis?from=${day(-600)}&to=${day(-1)}`;
-const shot = (page: Page, name: string, project: string) => page.screenshot({ path: `test-results/screenshots/${project}-${name}.png`, fullPage: true });
+const shot = async (page: Page, name: string, project: string) => {
+  await page.screenshot({ path: `test-results/screenshots/${project}-${name}.png`, fullPage: true });
+  await page.screenshot({ path: `test-results/screenshots/${project}-${name}-top.png` });
+};
 
 async function pmCounts(page: Page) {
   await page.goto(KPI_URL());

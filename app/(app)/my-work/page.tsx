@@ -28,10 +28,10 @@ export default async function MyWorkPage() {
     <div className="mx-auto max-w-2xl">
       <PageHeader
         title="My work"
-        subtitle={`${sorted.length} order${sorted.length === 1 ? "" : "s"} for you or anyone, due within 7 days${overdue ? ` · ${overdue} overdue` : ""}`}
+        subtitle={`${sorted.length} order${sorted.length === 1 ? "" : "s"}: yours due within 7 days, and anyone's due today${overdue ? ` · ${overdue} overdue` : ""}`}
       />
       {sorted.length === 0 ? (
-        <EmptyState title="Nothing due">No work orders are assigned to you or waiting for someone in the next 7 days.</EmptyState>
+        <EmptyState title="Nothing due">No work orders are assigned to you for the next 7 days, and none is waiting for someone today.</EmptyState>
       ) : (
         <ul className="space-y-3" aria-label="Work orders">
           {sorted.map(({ order: o, ovenTag, timeZone, assigneeName }) => {
