@@ -74,7 +74,10 @@ function outcome(o: NewOrder, plan: PlanRow, now: Date, rand: () => number, tech
   const age = (now.getTime() - due) / DAY;
   const r = rand();
   const minutes = Math.max(5, Math.round((plan.estimatedMinutes ?? 30) * (0.7 + rand() * 0.7)));
-  const overdueChance = age < 12 ? 0.35 : 0.004;
+  // Recent work is often still open; older misses are weekly-or-rarer tasks a few weeks late
+  // (a daily clean missed a month ago is simply skipped, not left open).
+  const daily = plan.rrule?.includes("FREQ=DAILY") ?? false;
+  const overdueChance = age < 12 ? 0.35 : age < 45 && !daily ? 0.05 : 0;
   if (r < overdueChance) return { ...o, assigneeId: rand() < 0.6 ? techId : null };
   if (r < overdueChance + 0.015) return { ...o, state: "cancelled", touched: true, notes: "Line down for changeover; skipped." };
   const late = r > 0.9;
