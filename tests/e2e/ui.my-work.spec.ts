@@ -1,4 +1,5 @@
 import path from "node:path";
+import AxeBuilder from "@axe-core/playwright";
 import { expect, test, type Page } from "@playwright/test";
 import { signIn } from "./support";
 
@@ -11,6 +12,12 @@ const PHOTO = path.resolve("tests/fixtures/checklist-photo.png");
 // move only because of what the technician does. (The oldest overdue order is days old.)
 const day = (offset: number) => new Date(Date.now() + offset * 86_400_000).toISOString().slice(0, 10);
 const KPI_URL = () => `/maintenance/kpis?from=${day(-600)}&to=${day(-1)}`;
+async function axe(page: Page) {
+  const result = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa"]).analyze();
+  const serious = result.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
+  expect(serious.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join(", ")})`)).toEqual([]);
+}
+
 const shot = async (page: Page, name: string, project: string) => {
   await page.screenshot({ path: `test-results/screenshots/${project}-${name}.png`, fullPage: true });
   await page.screenshot({ path: `test-results/screenshots/${project}-${name}-top.png` });
@@ -37,6 +44,7 @@ test("a technician closes an overdue order with its checklist and a photo; the m
   // Overdue orders come first.
   await expect(first).toContainText("overdue");
   await shot(page, "my-work-360", info.project.name);
+  await axe(page);
   const scroll = await page.evaluate(() => document.documentElement.scrollWidth);
   expect(scroll, "no sideways scrolling at 360 px").toBeLessThanOrEqual(360);
   const number = (await first.locator("p").first().innerText()).split("·")[1].trim();
@@ -58,6 +66,7 @@ test("a technician closes an overdue order with its checklist and a photo; the m
   await page.getByLabel("Labour (minutes)").fill("25");
   await page.getByLabel("Photo or document").setInputFiles(PHOTO);
   await shot(page, "close-360", info.project.name);
+  await axe(page);
   await page.getByRole("button", { name: `Close ${number}` }).click();
 
   await expect(page).toHaveURL(/\/work-orders\/\d+\?closed=1$/);
@@ -93,11 +102,13 @@ test("the maintenance pages read well on a phone and a laptop", async ({ page },
       if (name === "work-orders") await expect(page.getByRole("link", { name: /^WO-\d+$/ }).first()).toBeVisible();
       if (name === "plan-new") await expect(page.getByTestId("rrule-preview")).toContainText("RRULE:FREQ=WEEKLY");
       await shot(page, `${name}-${width}`, info.project.name);
+      await axe(page);
     }
     const ovens = (await (await page.request.get("/api/v1/ovens")).json()).items as { id: number; tag: string }[];
     await page.goto(`/ovens/${ovens.find((o) => o.tag === "L2-RF1")!.id}/maintenance`);
     await expect(page.getByRole("region", { name: "Plans" })).toBeVisible();
     await expect(page.getByText("Critical-phase spread rising")).toBeVisible();
     await shot(page, `oven-maintenance-${width}`, info.project.name);
+    await axe(page);
   }
 });

@@ -67,12 +67,12 @@ export default async function CalendarPage({ searchParams }: { searchParams: Pro
           const hidden = count - Math.min(d.planned.length, cap) - Math.min(d.forecast.length, cap);
           if (outside && count === 0) return <li key={d.date} className="hidden md:block" aria-hidden="true" />;
           return (
-            <li key={d.date} className={`card min-h-24 p-1.5 ${outside ? "opacity-60" : ""} ${d.date === today ? "border-ember" : ""} ${count === 0 ? "hidden md:block" : ""}`}>
+            <li key={d.date} className={`card min-h-24 p-1.5 ${outside ? "bg-paper-sunk" : ""} ${d.date === today ? "border-ember" : ""} ${count === 0 ? "hidden md:block" : ""}`}>
               <p className="mb-1 text-xs font-semibold text-ink-soft"><span className="md:hidden">{WEEKDAYS[(new Date(dateMs(d.date)).getUTCDay() + 6) % 7]} </span><span className="num">{d.date.slice(8)}</span>{d.date === today ? " · today" : ""}</p>
               <ul className="space-y-1">
                 {d.planned.slice(0, cap).map((e) => (
                   <li key={`p${e.orderId}`}>
-                    <Link href={`/work-orders/${e.orderId}`} className={`block rounded border px-1 py-0.5 text-xs leading-tight ${e.state === "done" ? "border-health-steady/40 text-ink-muted line-through decoration-health-steady/60" : "border-ink-faint/50 bg-paper-raised"}`} title={`${e.localTime} ${e.title} (${STATE_LABELS[e.state]})`}>
+                    <Link href={`/work-orders/${e.orderId}`} className={`block rounded border px-1 py-0.5 text-xs leading-tight ${e.state === "done" ? "border-health-steady/40 text-ink-soft line-through decoration-health-steady" : "border-ink-faint/50 bg-paper-raised"}`} title={`${e.localTime} ${e.title} (${STATE_LABELS[e.state]})`}>
                       <span className="num">{e.localTime}</span> {tags.get(e.ovenId ?? "") ?? ""} · {e.title}
                     </Link>
                   </li>

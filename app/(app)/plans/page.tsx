@@ -24,7 +24,7 @@ export default async function PlansPage() {
         actions={can(actor.role, "plan.manage") ? <Link href="/plans/new" className={buttonClass("primary")}>New plan</Link> : null}
       />
       {rows.length === 0 ? <EmptyState title="No plans yet">Add a plan for one oven or several at once.</EmptyState> : (
-        <div className="card overflow-x-auto">
+        <div className="card overflow-x-auto" role="region" aria-label="Plans" tabIndex={0}>
           <table className="w-full min-w-[640px] text-left text-sm">
             <thead className="border-b border-paper-line bg-paper-sunk/60 text-xs uppercase tracking-wide text-ink-muted">
               <tr><th className="px-3 py-2">Oven</th><th className="px-3 py-2">Plan</th><th className="px-3 py-2">Trigger</th><th className="px-3 py-2">Next due</th><th className="px-3 py-2">Est.</th></tr>

@@ -148,7 +148,7 @@ export function WorkOrderTable({ ovens, people, canAssign, initialOvenId = "", i
       ) : null}
 
       {result.error ? <p role="alert" className="text-sm text-health-act">{(result.error as Error).message}</p> : null}
-      <div className="card overflow-x-auto">
+      <div className="card overflow-x-auto" role="region" aria-label="Work orders" tabIndex={0}>
         <table className="w-full min-w-[760px] text-left text-sm">
           <thead className="border-b border-paper-line bg-paper-sunk/60 text-xs uppercase tracking-wide text-ink-muted">
             {table.getHeaderGroups().map((g) => (

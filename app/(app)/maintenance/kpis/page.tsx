@@ -58,7 +58,7 @@ export default async function MaintenanceKpisPage({ searchParams }: { searchPara
         <Tile label="Availability" value={pct(fleet.availability)} unit="%" detail={`${Math.round(fleet.breakdowns.downtimeMinutesInPeriod)} min of breakdown downtime`} />
         <Tile testId="kpi-backlog" label="Backlog" value={String(fleet.backlog.total)} unit="orders" detail={BACKLOG_BUCKETS.map((b) => `${b} d: ${fleet.backlog[b]}`).join(" · ")} />
       </section>
-      <section aria-label="Per oven" className="card mt-5 overflow-x-auto">
+      <section aria-label="Per oven" className="card mt-5 overflow-x-auto" tabIndex={0}>
         <table className="w-full min-w-[640px] text-left text-sm">
           <thead className="border-b border-paper-line bg-paper-sunk/60 text-xs uppercase tracking-wide text-ink-muted">
             <tr><th className="px-3 py-2">Oven</th><th className="px-3 py-2">PM compliance</th><th className="px-3 py-2">MTBF</th><th className="px-3 py-2">MTTR</th><th className="px-3 py-2">Availability</th><th className="px-3 py-2">Backlog</th></tr>

@@ -57,7 +57,7 @@ export default async function OvenMaintenance({ params }: { params: Promise<{ ov
           {recent.length ? <ul>{recent.map((o) => orderRow(o, o.completedAt ?? o.updatedAt))}</ul> : <p className="text-sm text-ink-muted">None yet.</p>}
         </section>
       </div>
-      <section className="card overflow-x-auto p-4" aria-label="Plans">
+      <section className="card overflow-x-auto p-4" aria-label="Plans" tabIndex={0}>
         <h2 className="mb-2 text-base font-semibold">Plans</h2>
         {plans.length === 0 ? <EmptyState title="No plans yet">Add preventive plans (flux and exhaust cleaning, conveyor lubrication, blower checks, calibration) for {oven.tag}.</EmptyState> : (
           <table className="w-full min-w-[560px] text-left text-sm">
