@@ -104,6 +104,12 @@ test("the maintenance pages read well on a phone and a laptop", async ({ page },
       await shot(page, `${name}-${width}`, info.project.name);
       await axe(page);
     }
+    const plan = (await (await page.request.get("/api/v1/plans")).json()).items.find((p: { title: string }) => p.title === "Check heater elements and connections");
+    await page.goto(`/plans/${plan.id}`);
+    await expect(page.getByRole("heading", { name: plan.title })).toBeVisible();
+    await expect(page.getByRole("note", { name: "Safety" }).first()).toContainText("lock out power");
+    await shot(page, `plan-${width}`, info.project.name);
+    await axe(page);
     const ovens = (await (await page.request.get("/api/v1/ovens")).json()).items as { id: number; tag: string }[];
     await page.goto(`/ovens/${ovens.find((o) => o.tag === "L2-RF1")!.id}/maintenance`);
     await expect(page.getByRole("region", { name: "Plans" })).toBeVisible();

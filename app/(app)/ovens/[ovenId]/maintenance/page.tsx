@@ -14,6 +14,7 @@ import { formatDateTime } from "@/lib/format";
 import { requirePermission } from "@/lib/session";
 import { can } from "@/lib/permissions";
 import { MeterForm } from "./meter-form";
+import { RaiseOrderForm } from "@/components/maintenance/raise-order-form";
 
 export const metadata = { title: "Maintenance" };
 export const dynamic = "force-dynamic";
@@ -77,6 +78,12 @@ export default async function OvenMaintenance({ params }: { params: Promise<{ ov
           </table>
         )}
       </section>
+      {can(actor.role, "workorder.create") ? (
+        <section className="card p-4" aria-label="Report a problem">
+          <h2 className="mb-2 text-base font-semibold">Report a problem</h2>
+          <RaiseOrderForm ovenId={oven.id} />
+        </section>
+      ) : null}
       <section className="card p-4" aria-label="Meter readings">
         <h2 className="mb-2 text-base font-semibold">Meter readings</h2>
         {meters.length ? (
