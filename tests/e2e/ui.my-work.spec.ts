@@ -86,6 +86,8 @@ test("a technician closes an overdue order with its checklist and a photo; the m
 });
 
 test("the maintenance pages read well on a phone and a laptop", async ({ page }, info) => {
+  // Fourteen pages, each checked with axe at two widths.
+  test.setTimeout(180_000);
   await signIn(page, "manager");
   for (const width of [360, 1366]) {
     await page.setViewportSize({ width, height: width === 360 ? 780 : 900 });
