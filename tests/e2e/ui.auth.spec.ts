@@ -55,10 +55,13 @@ test("admin invites a technician, who sets a password; repeated failures then lo
   const fresh = await browser.newContext();
   const p2 = await fresh.newPage();
   await p2.goto(firstLink(invite.text, "/invite/"));
+  // Fill only after hydration: a submit before it is a native POST that reloads the page mid-test.
+  await p2.waitForLoadState("networkidle");
   await p2.getByLabel("New password").fill("short");
   await p2.getByLabel("The same password again").fill("short");
   await p2.getByRole("button", { name: "Set password" }).click();
   await expect(p2.getByText("at least 10 characters")).toBeVisible();
+  await p2.waitForLoadState("networkidle");
   await p2.getByLabel("New password").fill("brand-new-password");
   await p2.getByLabel("The same password again").fill("brand-new-password");
   await p2.getByRole("button", { name: "Set password" }).click();
