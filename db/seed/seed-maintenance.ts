@@ -101,7 +101,7 @@ async function ensureOneOffs(tx: DbOrTx, byTag: Map<string, number>, now: Date, 
   const have = new Set((await tx.select({ title: workOrders.title }).from(workOrders).where(inArray(workOrders.title, titles))).map((r) => r.title));
   let n = 0;
   if (!have.has(BREAKDOWN_TITLE) && byTag.has("L1-RF1")) {
-    const failure = new Date(now.getTime() - 96 * DAY - 1.5 * 3_600_000); // 10:30 UTC
+    const failure = new Date(now.getTime() - 41 * DAY - 1.5 * 3_600_000); // 10:30 UTC, inside the KPI page's default 90 days
     const [row] = await tx
       .insert(workOrders)
       .values({
