@@ -10,11 +10,95 @@ import * as files from "./schema/files";
 import * as windows from "./schema/windows";
 import * as instruments from "./schema/instruments";
 import * as runs from "./schema/runs";
+import * as maintenance from "./schema/maintenance";
 
-export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail, ...changes, ...files, ...windows, ...instruments, ...runs };
+export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail, ...changes, ...files, ...windows, ...instruments, ...runs, ...maintenance };
 export type Db = LibSQLDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 export type DbOrTx = Db | Tx;
+
+/**
+ * With one connection, libSQL refuses (TRANSACTION_ACTIVE) any statement sent while a
+ * transaction holds it — so two requests at once, e.g. two people closing the same work order,
+ * made one of them fail with a 500. This wrapper queues instead: statements and transactions
+ * take turns on the connection, a transaction keeping its turn until it commits or rolls back.
+ * A statement sent on the outer client from inside a transaction would wait for ever, so a
+ * wait longer than the busy timeout is reported as an error.
+ */
+function queueOnOneConnection(client: Client, waitMs: number): Client {
+  let tail: Promise<void> = Promise.resolve();
+  const turn = async (): Promise<() => void> => {
+    let release!: () => void;
+    const mine = new Promise<void>((r) => (release = r));
+    const before = tail;
+    tail = tail.then(() => mine);
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const timeout = new Promise<never>((_, reject) => {
+      timer = setTimeout(() => reject(new Error(`Waited ${waitMs} ms for the database connection; is a statement using the outer client inside a transaction?`)), waitMs);
+    });
+    try {
+      await Promise.race([before, timeout]);
+    } catch (e) {
+      // Give the turn up when it comes, so the queue keeps moving.
+      before.then(release);
+      throw e;
+    } finally {
+      clearTimeout(timer);
+    }
+    return release;
+  };
+  const queued = <A extends unknown[], R>(fn: (...args: A) => Promise<R>) => async (...args: A): Promise<R> => {
+    const release = await turn();
+    try {
+      return await fn(...args);
+    } finally {
+      release();
+    }
+  };
+  return new Proxy(client, {
+    get(target, prop, receiver) {
+      if (prop === "execute" || prop === "batch" || prop === "executeMultiple" || prop === "migrate") {
+        return queued((target[prop] as (...a: unknown[]) => Promise<unknown>).bind(target));
+      }
+      if (prop === "transaction") {
+        return async (...args: Parameters<Client["transaction"]>) => {
+          const release = await turn();
+          let tx;
+          try {
+            tx = await target.transaction(...args);
+          } catch (e) {
+            release();
+            throw e;
+          }
+          let done = false;
+          const finish = () => {
+            if (!done) {
+              done = true;
+              release();
+            }
+          };
+          for (const m of ["commit", "rollback"] as const) {
+            const orig = tx[m].bind(tx);
+            tx[m] = async () => {
+              try {
+                return await orig();
+              } finally {
+                finish();
+              }
+            };
+          }
+          const close = tx.close.bind(tx);
+          tx.close = () => {
+            close();
+            finish();
+          };
+          return tx;
+        };
+      }
+      return Reflect.get(target, prop, receiver);
+    },
+  });
+}
 
 /**
  * Opens the database. Used by the app (db/index.ts), scripts and tests alike.
@@ -39,5 +123,6 @@ export async function openDatabase(url: string, authToken?: string): Promise<{ d
   }
   await client.execute("PRAGMA busy_timeout=10000");
   await client.execute("PRAGMA foreign_keys=ON");
-  return { db: drizzle(client, { schema }), client };
+  const shared = isFile ? queueOnOneConnection(client, 30_000) : client;
+  return { db: drizzle(shared, { schema }), client };
 }

@@ -10,6 +10,11 @@ import { signOutAction } from "./actions";
 
 function navFor(actor: Actor): { main: NavItem[]; admin: NavItem[] } {
   const main: NavItem[] = [{ href: "/fleet", label: "Fleet" }];
+  if (can(actor.role, "workorder.update")) main.push({ href: "/my-work", label: "My work" });
+  if (can(actor.role, "maintenance.read")) {
+    main.push({ href: "/work-orders", label: "Work orders" }, { href: "/calendar", label: "Calendar" }, { href: "/plans", label: "Plans" });
+    main.push({ href: "/maintenance/kpis", label: "Maintenance KPIs" });
+  }
   if (can(actor.role, "run.read")) main.push({ href: "/runs", label: "Runs" }, { href: "/windows", label: "Windows" }, { href: "/instruments", label: "Instruments" });
   if (can(actor.role, "change.read")) main.push({ href: "/changes", label: "Changes" });
   if (can(actor.role, "subscription.manage.own")) main.push({ href: "/settings/notifications", label: "E-mail settings" });

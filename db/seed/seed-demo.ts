@@ -3,6 +3,7 @@ import { and, eq } from "drizzle-orm";
 import type { Db } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
 import { users } from "../schema/users";
+import { seedMaintenance } from "./seed-maintenance";
 import { DEMO_LINES, DEMO_OVENS, DEMO_SITE, DEMO_USERS } from "./demo-plant";
 import { seedMail } from "./seed-mail";
 import { seedRuns } from "./seed-runs";
@@ -44,5 +45,7 @@ export async function seedDemo(db: Db, { password, now = new Date() }: { passwor
   });
   counts.subscriptions = (await seedMail(db, { now })).subscriptions;
   counts.runs = (await seedRuns(db, { now })).runs;
+  // Plans, eighteen months of work orders and meter readings (idempotent on its own keys).
+  await seedMaintenance(db, { now });
   return counts;
 }

@@ -60,6 +60,7 @@ test("admin invites a technician, who sets a password; repeated failures then lo
   await p2.getByLabel("The same password again").fill("short");
   await p2.getByRole("button", { name: "Set password" }).click();
   await expect(p2.getByText("at least 10 characters")).toBeVisible();
+  await p2.waitForLoadState("networkidle");
   await p2.getByLabel("New password").fill("brand-new-password");
   await p2.getByLabel("The same password again").fill("brand-new-password");
   await p2.getByRole("button", { name: "Set password" }).click();

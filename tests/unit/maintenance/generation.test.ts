@@ -111,9 +111,20 @@ describe("generation is idempotent (properties)", () => {
     fc.assert(
       fc.property(planArb, fc.integer({ min: 1, max: 30 }), ({ plan: p, now }, laterDays) => {
         const later = new Date(now.getTime() + laterDays * DAY);
-        const a = planOccurrencesToGenerate({ plan: p, existingOccurrenceKeys: new Set(), now });
-        const b = planOccurrencesToGenerate({ plan: p, existingOccurrenceKeys: new Set(a.map((o) => o.occurrenceKey)), now: later });
-        const once = planOccurrencesToGenerate({ plan: p, existingOccurrenceKeys: new Set(), now: later });
+        // One call returns at most 500 occurrences and the next call continues (generation.ts,
+        // MAX_PER_RUN), so "a run" here is repeated calls until nothing is left.
+        const drain = (at: Date, have: Set<string>) => {
+          const out: ReturnType<typeof planOccurrencesToGenerate> = [];
+          for (;;) {
+            const batch = planOccurrencesToGenerate({ plan: p, existingOccurrenceKeys: have, now: at });
+            if (!batch.length) return out;
+            for (const o of batch) have.add(o.occurrenceKey);
+            out.push(...batch);
+          }
+        };
+        const a = drain(now, new Set());
+        const b = drain(later, new Set(a.map((o) => o.occurrenceKey)));
+        const once = drain(later, new Set());
         const aKeys = new Set(a.map((o) => o.occurrenceKey));
         for (const o of b) expect(aKeys.has(o.occurrenceKey)).toBe(false);
         expect([...a, ...b].map((o) => o.occurrenceKey).sort()).toEqual(once.map((o) => o.occurrenceKey).sort());
