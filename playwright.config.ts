@@ -29,7 +29,7 @@ export default defineConfig({
   projects: [
     { name: "api", testMatch: /api\..*spec\.ts/, use: { launchOptions } },
     { name: "laptop", testMatch: /ui\..*spec\.ts/, use: { ...devices["Desktop Chrome"], viewport: { width: 1366, height: 900 }, launchOptions } },
-    { name: "phone", testMatch: /ui\.(views|mail|runs|my-work)\.spec\.ts/, use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, launchOptions } },
+    { name: "phone", testMatch: /ui\.(views|mail|runs|my-work|drift)\.spec\.ts/, use: { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 2, launchOptions } },
   ],
   webServer: {
     command: "node --import tsx --import ./scripts/_shims/server-only.mjs scripts/e2e-server.mts",

@@ -7,7 +7,7 @@ const config: Config = {
   theme: {
     extend: {
       colors: {
-        ink: { DEFAULT: "#1c2126", soft: "#3d454d", muted: "#5b636b", faint: "#8a9096" },
+        ink: { DEFAULT: "#1c2126", soft: "#3d454d", muted: "#5b636b", faint: "#687077" },
         paper: { DEFAULT: "#faf7f2", raised: "#ffffff", sunk: "#f1ece4", line: "#e2dbd0" },
         ember: { DEFAULT: "#c2410c", strong: "#9a3412", soft: "#fde8dc", ring: "#ea580c" },
         health: {

@@ -11,8 +11,9 @@ import * as windows from "./schema/windows";
 import * as instruments from "./schema/instruments";
 import * as runs from "./schema/runs";
 import * as maintenance from "./schema/maintenance";
+import * as drift from "./schema/drift";
 
-export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail, ...changes, ...files, ...windows, ...instruments, ...runs, ...maintenance };
+export const schema = { ...users, ...apiTokens, ...fleet, ...audit, ...mail, ...changes, ...files, ...windows, ...instruments, ...runs, ...maintenance, ...drift };
 export type Db = LibSQLDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 export type DbOrTx = Db | Tx;

@@ -1,3 +1,4 @@
+import Link from "next/link";
 import type { ChangeListRow } from "@/db/queries/changes";
 import { CHANGE_AREA_LABELS } from "@/lib/validation/change";
 import { formatDateTime } from "@/lib/format";
@@ -27,9 +28,14 @@ export function ChangeList({ rows, timeZone, showOven = false }: { rows: ChangeL
             <span className="font-medium">{c.after}</span>
           </p>
           {c.reason ? <p className="mt-1 text-sm text-ink-soft">{c.reason}</p> : null}
-          <p className="mt-1 text-xs text-ink-muted">
-            Logged by {author?.name ?? author?.email ?? "unknown"}
-            {c.workOrderId ? ` · under work order ${c.workOrderId}` : ""}
+          <p className="mt-1 flex flex-wrap items-center justify-between gap-2 text-xs text-ink-muted">
+            <span>
+              Logged by {author?.name ?? author?.email ?? "unknown"}
+              {c.workOrderId ? ` · under work order ${c.workOrderId}` : ""}
+            </span>
+            <Link href={`/changes/${c.id}?metric=${c.area === "controller_firmware" ? "talMin" : "deltaTPeak"}`} className="inline-flex min-h-11 items-center text-sm font-medium text-ember-strong underline">
+              Change impact
+            </Link>
           </p>
         </li>
       ))}

@@ -9,14 +9,17 @@ import { NavLinks, type NavItem } from "./nav-links";
 import { signOutAction } from "./actions";
 
 function navFor(actor: Actor): { main: NavItem[]; admin: NavItem[] } {
+  // Floor work first, then the measurement, then planning; each entry only where the role may read it.
   const main: NavItem[] = [{ href: "/fleet", label: "Fleet" }];
   if (can(actor.role, "workorder.update")) main.push({ href: "/my-work", label: "My work" });
+  if (can(actor.role, "alert.read")) main.push({ href: "/alerts", label: "Alerts" });
+  if (can(actor.role, "run.read")) main.push({ href: "/runs", label: "Runs" });
+  if (can(actor.role, "change.read")) main.push({ href: "/changes", label: "Changes" });
   if (can(actor.role, "maintenance.read")) {
     main.push({ href: "/work-orders", label: "Work orders" }, { href: "/calendar", label: "Calendar" }, { href: "/plans", label: "Plans" });
     main.push({ href: "/maintenance/kpis", label: "Maintenance KPIs" });
   }
-  if (can(actor.role, "run.read")) main.push({ href: "/runs", label: "Runs" }, { href: "/windows", label: "Windows" }, { href: "/instruments", label: "Instruments" });
-  if (can(actor.role, "change.read")) main.push({ href: "/changes", label: "Changes" });
+  if (can(actor.role, "run.read")) main.push({ href: "/windows", label: "Windows" }, { href: "/instruments", label: "Instruments" });
   if (can(actor.role, "subscription.manage.own")) main.push({ href: "/settings/notifications", label: "E-mail settings" });
   const admin: NavItem[] = [];
   if (can(actor.role, "user.manage")) admin.push({ href: "/settings/people", label: "People" });

@@ -1,4 +1,5 @@
 import "server-only";
+import { refreshHealth } from "./health";
 import { and, asc, eq, like, or, sql, type SQL } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { lines, ovens, sites, type OvenRow } from "../schema/fleet";
@@ -56,6 +57,7 @@ export async function createOven(db: Db, input: OvenCreateInput, actor: Actor): 
       await assertLine(tx, input.lineId);
       const [created] = await tx.insert(ovens).values(input).returning();
       await recordAudit(tx, { actor, action: "oven.create", entity: "oven", entityId: created.id, after: created });
+      await refreshHealth(tx, created.id, new Date());
       return created;
     });
   } catch (err) {
@@ -71,6 +73,7 @@ export async function updateOven(db: Db, id: number, patch: OvenUpdateInput, act
       if (patch.lineId) await assertLine(tx, patch.lineId);
       const [after] = await tx.update(ovens).set({ ...patch, updatedAt: new Date() }).where(eq(ovens.id, id)).returning();
       await recordAudit(tx, { actor, action: patch.serviceState === "retired" ? "oven.retire" : "oven.update", entity: "oven", entityId: id, before, after });
+      if (patch.serviceState && patch.serviceState !== before.serviceState) await refreshHealth(tx, id, new Date());
       return after;
     });
   } catch (err) {

@@ -1,4 +1,6 @@
 import "server-only";
+import { applyRunToDrift } from "./drift";
+import { refreshHealth } from "./health";
 import { eq } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { storedFiles } from "../schema/files";
@@ -85,6 +87,9 @@ export async function createRun(db: Db, ovenId: number, input: RunUploadInput, f
         await rememberMapping(tx, prepared.instrument.id, prepared.board.id, prepared.mapping.mapping);
       }
       await recordAudit(tx, { actor, action: "run.create", entity: "run", entityId: runId, after: { ovenId, verdict: prepared.analysis.verdict.status, file: sha, calibration: prepared.calibration.status } });
+      // Drift tracking takes one step per metric, then the oven's health (an alert if it worsened).
+      await applyRunToDrift(tx, { id: runId, ovenId, runAt: prepared.runAt, ...prepared.analysis.board });
+      await refreshHealth(tx, ovenId, new Date(), runId);
       return runId;
     });
     return { id, prepared, fileSha256: sha };

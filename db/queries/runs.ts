@@ -1,4 +1,6 @@
 import "server-only";
+import { recomputeOven } from "./drift";
+import { refreshHealth } from "./health";
 import { and, asc, desc, eq, isNull, ne } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { ovens } from "../schema/fleet";
@@ -120,6 +122,9 @@ export async function deleteRun(db: Db, runId: number, actor: Actor) {
   const purge = await db.transaction(async (tx) => {
     await tx.update(runs).set({ deletedAt: new Date() }).where(eq(runs.id, runId));
     await recordAudit(tx, { actor, action: "run.delete", entity: "run", entityId: runId, before: { ovenId: before.ovenId, runAt: before.runAt, verdict: before.verdictStatus, file: before.fileSha256 } });
+    // A past run changed: drift is rebuilt from the history that remains, then health follows.
+    await recomputeOven(tx, before.ovenId);
+    await refreshHealth(tx, before.ovenId, new Date());
     if (!before.fileSha256) return null;
     const [other] = await tx.select({ id: runs.id }).from(runs).where(and(eq(runs.fileSha256, before.fileSha256), isNull(runs.deletedAt), ne(runs.id, runId))).limit(1);
     if (other) return null;

@@ -1,4 +1,5 @@
 import "server-only";
+import { refreshHealth } from "./health";
 import { and, asc, desc, eq, gte, inArray, lt, or, sql, type SQL } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
@@ -163,6 +164,8 @@ export async function patchWorkOrder(db: Db, id: number, patch: WorkOrderPatch, 
       if (parts.length) await tx.insert(workOrderParts).values(parts.map((p) => ({ ...p, workOrderId: id })));
     }
     await recordAudit(tx, { actor, action: to === "done" ? "workorder.close" : "workorder.update", entity: "work_order", entityId: id, before, after: row });
+    // An open breakdown makes the oven Down; closing it lets the health recover.
+    if (row.breakdown && row.state !== before.state) await refreshHealth(tx, row.ovenId, now);
     return row;
   });
   if (!after) throw await conflict(db, id);
@@ -200,6 +203,7 @@ export async function createWorkOrder(db: Db, input: WorkOrderCreateInput, actor
     await numberPendingOrders(tx);
     const created = (await getWorkOrder(tx, row.id))!;
     await recordAudit(tx, { actor, action: "workorder.create", entity: "work_order", entityId: row.id, after: created });
+    if (created.breakdown) await refreshHealth(tx, created.ovenId, now);
     return workOrderJson(created);
   });
 }

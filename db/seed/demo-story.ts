@@ -6,6 +6,7 @@ export const LAB_WEEKS = 78;
 export type DemoChange = {
   ovenTag: string;
   area: "fan" | "baffle" | "heater" | "controller_firmware" | "insulation" | "sensor" | "conveyor" | "exhaust" | "other";
+  summary: string;
   daysBeforeEnd: number;
   before: string;
   after: string;
@@ -21,22 +22,22 @@ export const LAB_B1_STEPS = { baffleWeek: 26, fanWeek: 44, reshapeWeek: 60 } as 
 
 export const DEMO_CHANGES: DemoChange[] = [
   {
-    ovenTag: "LAB-B1", area: "baffle", daysBeforeEnd: labChangeDay(LAB_B1_STEPS.baffleWeek),
+    ovenTag: "LAB-B1", area: "baffle", summary: "Baffle plate fitted under the emitters", daysBeforeEnd: labChangeDay(LAB_B1_STEPS.baffleWeek),
     before: "open drawer, emitters straight above the board", after: "perforated steel baffle plate, 2 mm, 40 mm under the emitters",
     why: "ΔT at peak about 40 °C: board edges scorched while the centre barely wetted", effect: { metric: "deltaTPeak", before: 40, after: 13.5 },
   },
   {
-    ovenTag: "LAB-B1", area: "fan", daysBeforeEnd: labChangeDay(LAB_B1_STEPS.fanWeek),
+    ovenTag: "LAB-B1", area: "fan", summary: "Circulation fan added", daysBeforeEnd: labChangeDay(LAB_B1_STEPS.fanWeek),
     before: "no circulation fan", after: "circulation fan, 40 mm blade, 60 % speed",
     why: "still 12–15 °C across the board; stagnant air over the centre", effect: { metric: "deltaTPeak", before: 13.5, after: 7 },
   },
   {
-    ovenTag: "LAB-B1", area: "fan", daysBeforeEnd: labChangeDay(LAB_B1_STEPS.reshapeWeek),
+    ovenTag: "LAB-B1", area: "fan", summary: "Circulation fan re-shaped", daysBeforeEnd: labChangeDay(LAB_B1_STEPS.reshapeWeek),
     before: "fan blade 40 mm, speed 60 %", after: "fan blade 55 mm, re-shaped pitch, speed 75 %",
     why: "bring ΔT under the 5 °C the prototype customers ask for", effect: { metric: "deltaTPeak", before: 7, after: 4.5 },
   },
   {
-    ovenTag: "L1-RF2", area: "controller_firmware", daysBeforeEnd: 243,
+    ovenTag: "L1-RF2", area: "controller_firmware", summary: "Controller firmware update", daysBeforeEnd: 243,
     before: "firmware 2.3.1", after: "firmware 2.4.0",
     why: "maker's update for the zone-controller watchdog", effect: { metric: "talMin", before: 60, after: 56 },
   },

@@ -7,13 +7,14 @@ import { seedMaintenance } from "./seed-maintenance";
 import { DEMO_LINES, DEMO_OVENS, DEMO_SITE, DEMO_USERS } from "./demo-plant";
 import { seedMail } from "./seed-mail";
 import { seedRuns } from "./seed-runs";
+import { seedChangesAndDrift } from "./seed-drift";
 
 /**
  * Seeds the demo plant. Idempotent: every row is looked up by its natural key first and left
  * alone when present, so a second run changes nothing.
  */
 export async function seedDemo(db: Db, { password, now = new Date() }: { password: string; now?: Date }) {
-  const counts = { users: 0, sites: 0, lines: 0, ovens: 0, subscriptions: 0, runs: 0 };
+  const counts = { users: 0, sites: 0, lines: 0, ovens: 0, subscriptions: 0, runs: 0, changes: 0 };
   await db.transaction(async (tx) => {
     for (const u of DEMO_USERS) {
       const [found] = await tx.select({ id: users.id }).from(users).where(eq(users.email, u.email)).limit(1);
@@ -47,5 +48,7 @@ export async function seedDemo(db: Db, { password, now = new Date() }: { passwor
   counts.runs = (await seedRuns(db, { now })).runs;
   // Plans, eighteen months of work orders and meter readings (idempotent on its own keys).
   await seedMaintenance(db, { now });
+  // The modification log, then drift state and health from the whole history (needs runs and orders).
+  counts.changes = (await seedChangesAndDrift(db, { now })).changes;
   return counts;
 }

@@ -3,6 +3,7 @@ import { ACTION_REGISTRY, runAction } from "@/lib/action";
 import "@/lib/actions/ovens";
 import "@/lib/actions/admin";
 import "@/lib/actions/changes";
+import "@/lib/actions/drift";
 import "@/lib/actions/mail";
 import "@/lib/actions/measurement";
 import { ROLES, type Role } from "@/db/schema/users";

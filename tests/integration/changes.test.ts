@@ -10,7 +10,7 @@ let t: Awaited<ReturnType<typeof createTestDb>>;
 let ovenId = 0;
 beforeAll(async () => {
   t = await createTestDb();
-  [{ id: ovenId }] = await t.db.select({ id: ovens.id }).from(ovens).where(eq(ovens.tag, "LAB-B1"));
+  [{ id: ovenId }] = await t.db.select({ id: ovens.id }).from(ovens).where(eq(ovens.tag, "LAB-B2")); // the demo logs no change on LAB-B2
 });
 afterAll(() => t.close());
 

@@ -49,7 +49,7 @@ describe("the demo seed", () => {
   it("is idempotent: a second run adds nothing and changes nothing", async () => {
     const before = await t.db.select().from(ovens);
     const counts = await seedDemo(t.db, { password: "ovenward-demo" });
-    expect(counts).toEqual({ users: 0, sites: 0, lines: 0, ovens: 0, subscriptions: 0, runs: 0 });
+    expect(counts).toEqual({ users: 0, sites: 0, lines: 0, ovens: 0, subscriptions: 0, runs: 0, changes: 0 });
     expect(await t.db.select().from(ovens)).toEqual(before);
   });
 });

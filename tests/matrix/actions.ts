@@ -7,6 +7,7 @@ import { lines, ovens } from "@/db/schema/fleet";
 import { users } from "@/db/schema/users";
 import { apiTokens } from "@/db/schema/api-tokens";
 import { outbox } from "@/db/schema/mail";
+import { alerts } from "@/db/schema/drift";
 import type { Role } from "@/db/schema/users";
 
 // A valid input per server action, for the role matrix. Each call makes fresh names, so the
@@ -56,6 +57,15 @@ export const ACTION_INPUTS: Record<string, (db: Db, role: Role) => Promise<Recor
   revokeApiToken: async (db) => {
     const [t] = await db.insert(apiTokens).values({ userId: await userId(db, "tech@brightwater.example"), name: "r", role: "technician", prefix: "ow_x", tokenHash: uid() }).returning();
     return { tokenId: String(t.id) };
+  },
+  acknowledgeAlert: async (db) => {
+    const [o] = await db.select({ id: ovens.id }).from(ovens).limit(1);
+    const [a] = await db.insert(alerts).values({ ovenId: o.id, toState: "watch", reasons: ["matrix"], raisedAt: new Date() }).returning();
+    return { alertId: String(a.id), note: "Checked the blower; noted." };
+  },
+  setBaseline: async (db) => {
+    const rows = await db.select({ id: runs.id }).from(runs).where(eq(runs.ovenId, Number(await anyOven(db)))).orderBy(asc(runs.id)).limit(12);
+    return { ovenId: String(await anyOven(db)), metric: "deltaTPeak", fromRunId: String(rows[0].id), toRunId: String(rows[11].id) };
   },
   createChange: async (db) => ({ ovenId: String(await anyOven(db)), at: new Date(Date.now() - 60_000).toISOString(), area: "baffle", summary: `Baffle ${uid()}`, after: "plate B" }),
   updateSubscription: async (db, role) => ({ userId: await userId(db, ownEmail(role)), kind: "fleet_digest", enabled: "on", sendAt: "07:30", day_MO: "on" }),

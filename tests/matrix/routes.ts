@@ -197,3 +197,19 @@ export const ROUTE_MATRIX: RouteCase[] = [
 
 /** Route files that are not Ovenward's API but the sign-in library's own endpoints. */
 export const FRAMEWORK_ROUTES = ["app/api/auth/[...nextauth]/route.ts"];
+
+// Drift tracking: trends, change impact, the fleet view and alerts.
+ROUTE_MATRIX.push(
+  { method: "GET", file: "app/api/v1/ovens/[ovenId]/trends/route.ts", path: ({ ovenId }) => `/api/v1/ovens/${ovenId}/trends?metric=deltaTPeak`, expect: all(200) },
+  { method: "GET", file: "app/api/v1/changes/[changeId]/impact/route.ts", path: "/api/v1/changes/1/impact?metric=deltaTPeak", expect: all(200) }, // the seed's first change: LAB-B1's baffle
+  { method: "GET", file: "app/api/v1/fleet/route.ts", path: "/api/v1/fleet", expect: all(200) },
+  { method: "GET", file: "app/api/v1/alerts/route.ts", path: "/api/v1/alerts?status=all", expect: all(200) },
+  {
+    method: "POST",
+    file: "app/api/v1/alerts/[alertId]/acknowledge/route.ts",
+    path: "/api/v1/alerts/999999/acknowledge",
+    body: () => ({ note: "matrix check" }),
+    // The role check comes before the look-up: allowed roles reach "not found", the others are refused.
+    expect: { anonymous: 401, viewer: 403, technician: 404, engineer: 404, manager: 404, admin: 403 },
+  },
+);

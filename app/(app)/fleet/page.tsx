@@ -1,88 +1,117 @@
 import Link from "next/link";
 import { getDb } from "@/db";
-import { listOvens, type OvenListRow } from "@/db/queries/ovens";
+import { fleetView } from "@/db/queries/fleet-view";
 import { listSitesWithLines } from "@/db/queries/sites";
+import { maintenanceKpis } from "@/db/queries/maintenance-kpis";
 import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { buttonClass } from "@/components/ui/button";
-import { ServiceStateBadge } from "@/components/oven/service-state-badge";
+import { HealthBadge } from "@/components/oven/health-badge";
+import { Sparkline } from "@/components/drift/sparkline";
 import { requirePermission } from "@/lib/session";
 import { can } from "@/lib/permissions";
-import { fleetFilterSchema, OVEN_KIND_LABELS, SERVICE_STATE_LABELS, SERVICE_STATE_VALUES } from "@/lib/validation/oven";
+import { fleetFilterSchema } from "@/lib/validation/oven";
+import { formatAgo } from "@/lib/format";
 import { FleetFilters } from "./fleet-filters";
 
 export const metadata = { title: "Fleet" };
 
-function groupByLine(rows: OvenListRow[]) {
-  const groups = new Map<string, { site: string; line: string; ovens: OvenListRow[] }>();
-  for (const r of rows) {
-    const key = `${r.site.id}:${r.line.id}`;
-    if (!groups.has(key)) groups.set(key, { site: r.site.name, line: r.line.name, ovens: [] });
-    groups.get(key)!.ovens.push(r);
-  }
-  return [...groups.values()];
+const PERIODS: Record<string, number> = { "30d": 30, "90d": 90, "365d": 365 };
+
+function Tile({ label, value, unit, note }: { label: string; value: string; unit?: string; note?: string }) {
+  return (
+    <div className="card p-4">
+      <p className="text-xs font-semibold uppercase tracking-wider text-ink-muted">{label}</p>
+      <p className="mt-1 text-2xl font-semibold">
+        <span className="num">{value}</span>
+        {unit ? <span className="unit text-base">{unit}</span> : null}
+      </p>
+      {note ? <p className="mt-1 text-xs text-ink-muted">{note}</p> : null}
+    </div>
+  );
 }
+
+const VERDICT_STYLE: Record<string, string> = { pass: "text-health-steady", marginal: "text-health-watch", fail: "text-health-act" };
 
 export default async function FleetPage({ searchParams }: { searchParams: Promise<Record<string, string>> }) {
   const actor = await requirePermission("fleet.read");
-  const parsed = fleetFilterSchema.safeParse(await searchParams);
+  const raw = await searchParams;
+  const parsed = fleetFilterSchema.safeParse(raw);
   const filter = parsed.success ? parsed.data : {};
+  const days = PERIODS[raw.period ?? "30d"] ?? 30;
+  const now = new Date();
   const db = await getDb();
-  const [rows, sites, all] = await Promise.all([listOvens(db, filter), listSitesWithLines(db), listOvens(db)]);
-  const counts = Object.fromEntries(SERVICE_STATE_VALUES.map((s) => [s, all.filter((r) => r.oven.serviceState === s).length]));
-  const groups = groupByLine(rows);
+  const [rows, sites, kpis] = await Promise.all([
+    fleetView(db, { siteId: filter.siteId, lineId: filter.lineId }, now),
+    listSitesWithLines(db),
+    maintenanceKpis(db, { from: new Date(now.getTime() - days * 86_400_000), to: now, now }),
+  ]);
+  const active = rows.filter((r) => r.serviceState !== "retired");
+  const shown = rows
+    .filter((r) => (filter.state ? r.serviceState === filter.state : r.serviceState !== "retired"))
+    .filter((r) => !filter.q || r.tag.includes(filter.q.toUpperCase()) || r.name.toLowerCase().includes(filter.q.toLowerCase()));
+  const k = kpis.fleet;
+  const openAlerts = active.reduce((s, r) => s + r.openAlerts, 0);
   return (
     <>
       <PageHeader
         title="Fleet"
-        subtitle={`${all.length} ovens · ${counts.in_service} in service · ${counts.down} down · ${counts.retired} retired`}
+        subtitle={`${active.length} ovens in the fleet · ${active.filter((r) => r.state === "act" || r.state === "down").length} need action · ${active.filter((r) => r.state === "watch").length} on watch`}
         actions={can(actor.role, "oven.create") ? <Link href="/ovens/new" className={buttonClass("primary")}>Add an oven</Link> : null}
       />
+      <nav aria-label="Period" className="no-print mb-3 flex gap-2 text-sm">
+        {Object.keys(PERIODS).map((p) => (
+          <Link key={p} href={`/fleet?${new URLSearchParams({ ...raw, period: p })}`} aria-current={(raw.period ?? "30d") === p ? "true" : undefined} className={`min-h-11 rounded-lg border px-3 py-2.5 ${(raw.period ?? "30d") === p ? "border-ember bg-ember-soft text-ember-strong" : "border-paper-line bg-paper-raised"}`}>
+            Last {PERIODS[p]} days
+          </Link>
+        ))}
+      </nav>
+      <section aria-label="Fleet figures" className="mb-6 grid grid-cols-2 gap-3 lg:grid-cols-4">
+        <Tile label="PM compliance" value={k.pmCompliance.value == null ? "—" : (k.pmCompliance.value * 100).toFixed(0)} unit={k.pmCompliance.value == null ? undefined : "%"} note={k.pmCompliance.value == null ? k.pmCompliance.reason : `${k.pmCompliance.doneOnTime} of ${k.pmCompliance.due} on time`} />
+        <Tile label="MTBF" value={k.mtbfHours.value == null ? "—" : k.mtbfHours.value.toFixed(0)} unit={k.mtbfHours.value == null ? undefined : "h"} note={k.mtbfHours.value == null ? k.mtbfHours.reason : `${k.breakdowns.breakdowns} breakdowns`} />
+        <Tile label="MTTR" value={k.mttrMinutes.value == null ? "—" : k.mttrMinutes.value.toFixed(0)} unit={k.mttrMinutes.value == null ? undefined : "min"} note={k.mttrMinutes.value == null ? k.mttrMinutes.reason : undefined} />
+        <Tile label="Open alerts" value={String(openAlerts)} note={openAlerts ? "See the alerts inbox" : "Nothing to acknowledge"} />
+      </section>
       <FleetFilters sites={sites} filter={filter} />
-      {groups.length === 0 ? (
-        <EmptyState title={all.length ? "No oven matches these filters" : "No ovens yet"}>
-          {all.length ? "Clear a filter to see more of the fleet." : "An engineer adds each oven with its tag, kind and line. Its runs and maintenance then collect on its page."}
+      {shown.length === 0 ? (
+        <EmptyState title={rows.length ? "No oven matches these filters" : "No ovens yet"}>
+          {rows.length ? "Clear a filter to see more of the fleet." : "An engineer adds each oven with its tag, kind and line. Its runs and maintenance then collect on its page."}
         </EmptyState>
       ) : (
-        <div className="space-y-8">
-          {groups.map((g) => (
-            <section key={`${g.site}-${g.line}`} aria-labelledby={`line-${g.line}`}>
-              <h2 id={`line-${g.line}`} className="mb-2 text-sm font-semibold uppercase tracking-wider text-ink-muted">
-                {g.line} <span className="font-normal normal-case tracking-normal">· {g.site}</span>
-              </h2>
-              <ul className="grid gap-2">
-                {g.ovens.map(({ oven }) => (
-                  <li key={oven.id}>
-                    <Link
-                      href={`/ovens/${oven.id}`}
-                      className="card flex flex-col gap-1 p-4 hover:border-ember-ring sm:grid sm:grid-cols-[8rem_1fr_12rem_8rem] sm:items-center sm:gap-4"
-                    >
-                      <span className="flex items-center justify-between gap-2">
-                        <span className="text-lg font-semibold tracking-wide">{oven.tag}</span>
-                        <span className="sm:hidden">
-                          <ServiceStateBadge state={oven.serviceState} />
-                        </span>
-                      </span>
-                      <span className="min-w-0">
-                        <span className="block truncate font-medium">{oven.name}</span>
-                        <span className="block text-sm text-ink-muted">
-                          {OVEN_KIND_LABELS[oven.kind]}
-                          {oven.zones && oven.kind === "convection" ? `, ${oven.zones} zones` : ""}
-                        </span>
-                      </span>
-                      <span className="text-sm text-ink-muted">{[oven.maker, oven.model].filter(Boolean).join(" ") || "Maker not recorded"}</span>
-                      <span className="hidden sm:block">
-                        <ServiceStateBadge state={oven.serviceState} />
-                      </span>
-                    </Link>
-                  </li>
-                ))}
-              </ul>
-            </section>
+        <ul className="grid gap-2" aria-label="Ovens, worst state first">
+          {shown.map((o) => (
+            <li key={o.id}>
+              <Link href={`/ovens/${o.id}/health`} className="card grid gap-2 p-4 hover:border-ember-ring md:grid-cols-[6.5rem_1fr_8rem_11rem_8rem] md:items-center md:gap-4">
+                <span className="flex items-center justify-between md:block">
+                  <HealthBadge state={o.state} />
+                  <span className="text-lg font-semibold tracking-wide md:hidden">{o.tag}</span>
+                </span>
+                <span className="min-w-0">
+                  <span className="hidden text-lg font-semibold tracking-wide md:block">{o.tag}</span>
+                  <span className="block truncate text-sm">{o.name} · {o.line.name}</span>
+                  <span className="block text-sm text-ink-muted">{o.reasons[0]}</span>
+                </span>
+                <Sparkline points={o.deltaT} limit={o.deltaTLimit} label={`${o.tag} ΔT at peak, last 30 days`} />
+                <span className="text-sm">
+                  {o.lastRun ? (
+                    <>
+                      Last run {formatAgo(new Date(o.lastRun.runAt), now)} · <span className={`font-semibold ${VERDICT_STYLE[o.lastRun.verdict] ?? ""}`}>{o.lastRun.verdict}</span>
+                      {o.lastRun.windowUse != null ? <span className="num text-ink-muted"> {o.lastRun.windowUse.toFixed(0)} %</span> : null}
+                    </>
+                  ) : (
+                    <span className="text-ink-muted">No runs yet</span>
+                  )}
+                </span>
+                <span className="text-sm text-ink-muted">
+                  <span className="num">{o.openWorkOrders}</span> open{o.overdueWorkOrders ? <span className="font-semibold text-health-act"> · <span className="num">{o.overdueWorkOrders}</span> overdue</span> : null}
+                  <br />
+                  <span className="num">{o.openAlerts}</span> alert{o.openAlerts === 1 ? "" : "s"}
+                </span>
+              </Link>
+            </li>
           ))}
-        </div>
+        </ul>
       )}
-      <p className="sr-only">States: {SERVICE_STATE_VALUES.map((s) => SERVICE_STATE_LABELS[s]).join(", ")}.</p>
     </>
   );
 }

@@ -1,14 +1,32 @@
-import { EmptyState } from "@/components/ui/empty-state";
 import { loadOvenForPage } from "@/db/queries/oven-page";
+import { computeOvenHealth } from "@/db/queries/health";
+import { getDb } from "@/db";
+import { HealthBadge } from "@/components/oven/health-badge";
+import { SafetyNote } from "@/components/oven/safety-note";
+import { requirePermission } from "@/lib/session";
+import { HealthCharts } from "./health-charts";
 
 export const metadata = { title: "Health" };
 
 export default async function OvenHealth({ params }: { params: Promise<{ ovenId: string }> }) {
+  await requirePermission("fleet.read");
   const { oven } = await loadOvenForPage((await params).ovenId);
+  const now = new Date();
+  const health = await computeOvenHealth(await getDb(), oven.id, now);
   return (
-    <EmptyState title="No trend yet">
-      Health shows how {oven.tag}&apos;s ΔT, critical-phase spread, heat-up rate, coldest peak, shortest time above liquidus and time to
-      peak move across months, with every change and completed work order marked. It fills in once verification runs are recorded.
-    </EmptyState>
+    <div className="space-y-4">
+      <section aria-labelledby="health-heading" className="card p-4">
+        <h2 id="health-heading" className="flex flex-wrap items-center gap-2 font-semibold">
+          Health <HealthBadge state={health.state} />
+        </h2>
+        <ul className="mt-2 list-disc space-y-1 pl-5 text-sm">
+          {health.reasons.map((r) => (
+            <li key={r}>{r}</li>
+          ))}
+        </ul>
+      </section>
+      <HealthCharts ovenId={oven.id} now={now.getTime()} />
+      <SafetyNote kind="verdicts" />
+    </div>
   );
 }
