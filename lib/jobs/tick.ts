@@ -5,6 +5,7 @@ import { acquireLease, releaseLease } from "@/db/queries/outbox";
 import { drainOutbox, type MailTransport } from "./drain";
 import { enqueueDue } from "./enqueue";
 import { TICK_STEPS } from "./tick-steps";
+import "./plant-sources";
 
 export const TICK_LEASE = "scheduler";
 /** Longer than any tick should take; a tick that dies holding it blocks others this long at most. */

@@ -21,7 +21,8 @@ describe("a sink that refuses", () => {
 
   it("leaves the message pending with its attempts and error; backoff 1, 2, 4 minutes", async () => {
     await h.stopSink();
-    expect(await h.tick(t0)).toEqual({ enqueued: 1, sent: 0, failed: 1, generated: 0 });
+    // (The tick also generates the seeded plans' work orders; only the mail counts matter here.)
+    expect(await h.tick(t0)).toMatchObject({ enqueued: 1, sent: 0, failed: 1 });
     let [row] = await h.outboxRows();
     expect(row).toMatchObject({ state: "pending", attempts: 1 });
     expect(row.lastError).toMatch(/ECONNREFUSED|ESOCKET|ECONNECTION/);
