@@ -11,7 +11,10 @@ const now = new Date();
 
 beforeAll(async () => {
   h = await mailHarness(2758);
-  await subscribe(h.db, "engineer@brightwater.example", "drift_alert", { createdAt: new Date(now.getTime() - 86_400_000) });
+  const since = { createdAt: new Date(now.getTime() - 86_400_000) };
+  await subscribe(h.db, "engineer@brightwater.example", "drift_alert", since);
+  await subscribe(h.db, "engineer@brightwater.example", "calibration_due", since);
+  await subscribe(h.db, "tech@brightwater.example", "overdue_work", since);
 });
 afterAll(() => h.close());
 
@@ -33,5 +36,28 @@ describe("the scheduler tick with the plant's sources", () => {
     const mails = (await h.received()).filter((m) => m.envelopeTo.includes("engineer@brightwater.example") && /L2-RF1/.test(m.subject ?? ""));
     expect(mails).toHaveLength(1);
     expect(mails[0].text).toMatch(/out of window|projected/);
+  });
+
+  it("reminds of the probe set's calibration and of overdue work, once per reminder", async () => {
+    const mine = async () => {
+      const got = await h.received();
+      return {
+        // The demo's probe set A falls due within 30 days (db/seed/demo-story.ts).
+        cal: got.filter((m) => m.envelopeTo.includes("engineer@") && /Probe set A/.test(`${m.subject} ${m.text}`)),
+        overdue: got.filter((m) => m.envelopeTo.includes("tech@") && /overdue/i.test(m.subject ?? "")),
+      };
+    };
+    const before = await mine();
+    expect(before.cal.length).toBeGreaterThanOrEqual(1);
+    expect(before.overdue.length).toBeGreaterThanOrEqual(1);
+    expect(before.overdue[0].text).toMatch(/L\d-RF\d|LAB-B\d/);
+    // Each reminder has its own key (30 days, 7 days; one per assignee per day): no repeats.
+    expect(new Set(before.cal.map((m) => m.subject)).size).toBe(before.cal.length);
+    const t = new Date(now.getTime() + 5 * 60_000);
+    await h.tick(t);
+    await h.tick(new Date(t.getTime() + 60_000));
+    const after = await mine();
+    expect(after.cal.length).toBe(before.cal.length);
+    expect(after.overdue.length).toBe(before.overdue.length);
   });
 });
