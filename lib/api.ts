@@ -95,3 +95,14 @@ export async function readMultipart(req: Request, { maxBytes, label }: { maxByte
     throw new AppError("invalid_input", "The multipart body could not be read. Check that the upload finished.", { fields: { file: "unreadable upload" } });
   }
 }
+
+/** A multipart upload with one file in the field `file` and plain string fields beside it. */
+export async function readFileUpload(req: Request, { maxBytes, label }: { maxBytes: number; label: string }) {
+  const form = await readMultipart(req, { maxBytes, label });
+  const file = form.get("file");
+  if (!(file instanceof File)) throw new AppError("invalid_input", `file: attach the ${label} in the form field named file.`, { fields: { file: "is required" } });
+  if (file.size > maxBytes) throw new AppError("file_too_large", `The ${label} is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`, { maxBytes });
+  const fields: Record<string, string> = {};
+  for (const [key, value] of form.entries()) if (key !== "file" && typeof value === "string") fields[key] = value;
+  return { file: { bytes: new Uint8Array(await file.arrayBuffer()), name: file.name, mediaType: file.type }, fields };
+}

@@ -1,4 +1,5 @@
 import { and, eq, inArray, isNotNull } from "drizzle-orm";
+import { seededRandom } from "@/lib/thermal/synthetic-profile";
 import type { Db, DbOrTx } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
 import { users } from "../schema/users";
@@ -24,16 +25,6 @@ const LINE_ONLY = new Set(["daily-conveyor-zones", "weekly-chain-lube", "quarter
 export const BREAKDOWN_TITLE = "Conveyor drive tripped mid-shift; drive belt replaced";
 export const DRIFT_TITLE = "Critical-phase spread rising";
 
-function mulberry32(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 function templatesFor(tag: string, isLab: boolean): PmTemplate[] {
   return REFLOW_PM_TEMPLATES.filter((t) => (t.whereFitted !== "nitrogen" || NITROGEN_OVENS.has(tag)) && !(isLab && LINE_ONLY.has(t.id)));
@@ -170,7 +161,7 @@ export async function seedMaintenance(db: Db, { now: rawNow = new Date() }: { no
   ).map((o) => ({ ...o, isLab: o.lineKind === "lab" }));
   const counts = { plans: 0, workOrders: 0, meterReadings: 0 };
   await db.transaction(async (tx) => {
-    const rand = mulberry32(20_260_402);
+    const rand = seededRandom(20_260_402);
     const orders: NewOrder[] = [];
     for (const oven of ovenRows) {
       const { plans, created } = await ensurePlans(tx, oven, createdAt, ids.engineer);
