@@ -3,14 +3,20 @@ import { and, asc, eq, isNull, gt } from "drizzle-orm";
 import type { DbOrTx } from "../client";
 import { runs } from "../schema/runs";
 import { changes } from "../schema/changes";
-import { driftBaselines, driftPoints, driftStates } from "../schema/drift";
+import { driftBaselines, driftPoints, driftSettings, driftStates } from "../schema/drift";
 import { selectBaseline, runsAfterBaseline, type BaselineStats } from "@/lib/drift/baseline";
 import { computeDriftSeries } from "@/lib/drift/drift-series";
 import { stepDrift } from "@/lib/drift/drift-state";
-import { DEFAULT_DRIFT_PARAMS, type DriftState } from "@/lib/drift/drift-types";
+import { DEFAULT_DRIFT_PARAMS, type DriftParams, type DriftState } from "@/lib/drift/drift-types";
 import { TRACKED_METRICS, type TrackedMetric } from "@/lib/tracked-metrics";
 
 type StoredBaseline = BaselineStats;
+
+/** The oven's detector settings (EWMA λ and L, CUSUM k and h in σ), or the defaults. */
+export async function driftParams(db: DbOrTx, ovenId: number): Promise<DriftParams> {
+  const [row] = await db.select().from(driftSettings).where(eq(driftSettings.ovenId, ovenId));
+  return row ? { lambda: row.lambda, L: row.L, cusumK: row.cusumK, cusumH: row.cusumH } : { ...DEFAULT_DRIFT_PARAMS };
+}
 
 /** The metric's values over the oven's live runs, oldest first (runs where it is undefined are left out). */
 export async function metricSeries(db: DbOrTx, ovenId: number, metric: TrackedMetric) {
@@ -45,7 +51,7 @@ export async function recomputeDrift(tx: DbOrTx, ovenId: number, metric: Tracked
     return null;
   }
   const monitored = runsAfterBaseline(series, baseline);
-  const { state, points } = computeDriftSeries(baseline, monitored, DEFAULT_DRIFT_PARAMS);
+  const { state, points } = computeDriftSeries(baseline, monitored, await driftParams(tx, ovenId));
   const rows = points.map((p) => ({ runId: Number(p.runId), metric, ovenId, at: new Date(p.at), value: p.value, ewma: p.ewma, ewmaUcl: p.ewmaUcl, ewmaLcl: p.ewmaLcl, cusumHigh: p.cusumHigh, cusumLow: p.cusumLow, signals: p.signals }));
   for (let i = 0; i < rows.length; i += 200) await tx.insert(driftPoints).values(rows.slice(i, i + 200));
   const last = series[series.length - 1];
@@ -76,7 +82,7 @@ export async function applyRunToDrift(tx: DbOrTx, run: { id: number; ovenId: num
       await recomputeDrift(tx, run.ovenId, metric);
       continue;
     }
-    const { state, pointResult: p } = stepDrift(stored.state as DriftState, { value: value!, at: run.runAt.getTime(), runId: run.id }, DEFAULT_DRIFT_PARAMS);
+    const { state, pointResult: p } = stepDrift(stored.state as DriftState, { value: value!, at: run.runAt.getTime(), runId: run.id }, await driftParams(tx, run.ovenId));
     await tx.insert(driftPoints).values({ runId: run.id, metric, ovenId: run.ovenId, at: run.runAt, value: p.value, ewma: p.ewma, ewmaUcl: p.ewmaUcl, ewmaLcl: p.ewmaLcl, cusumHigh: p.cusumHigh, cusumLow: p.cusumLow, signals: p.signals });
     await tx.update(driftStates).set({ state, lastRunId: run.id, lastRunAt: run.runAt, updatedAt: new Date() }).where(and(eq(driftStates.ovenId, run.ovenId), eq(driftStates.metric, metric)));
   }

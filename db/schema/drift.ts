@@ -82,3 +82,14 @@ export const alerts = sqliteTable(
 );
 
 export type AlertRow = typeof alerts.$inferSelect;
+
+/** Per-oven detector settings; an oven without a row uses the defaults (λ 0.2, L 3, k 0.5σ, h 5σ). */
+export const driftSettings = sqliteTable("drift_setting", {
+  ovenId: integer("oven_id").primaryKey().references(() => ovens.id),
+  lambda: real("lambda").notNull(),
+  L: real("l").notNull(),
+  cusumK: real("cusum_k").notNull(),
+  cusumH: real("cusum_h").notNull(),
+  updatedBy: text("updated_by").references(() => users.id),
+  updatedAt: integer("updated_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
+});

@@ -7,7 +7,11 @@ import { refreshHealth } from "@/db/queries/health";
 import { recordAudit } from "@/db/queries/audit";
 import { driftBaselines } from "@/db/schema/drift";
 import { runs } from "@/db/schema/runs";
-import { acknowledgeSchema, baselineSchema } from "@/lib/validation/drift";
+import { acknowledgeSchema, baselineByDatesSchema, baselineSchema, driftSettingsSchema } from "@/lib/validation/drift";
+import { driftSettings } from "@/db/schema/drift";
+import { recomputeOven } from "@/db/queries/drift";
+import { asc, gte, lte, isNull } from "drizzle-orm";
+import { TRACKED_METRICS } from "@/lib/tracked-metrics";
 import { AppError, forbidden } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 
@@ -39,5 +43,39 @@ export const setBaselineDef = defineAction({
       await recordAudit(tx, { actor, action: "baseline.set", entity: "drift_baseline", entityId: `${input.ovenId}:${input.metric}`, before: before ?? null, after: row });
       return { ovenId: input.ovenId, n: result?.baseline.n ?? 0 };
     });
+  },
+});
+
+export const setDriftSettingsDef = defineAction({
+  name: "setDriftSettings",
+  permission: "baseline.manage",
+  schema: driftSettingsSchema,
+  run: async ({ db, actor, input }) =>
+    db.transaction(async (tx) => {
+      const { ovenId, ...params } = input;
+      const [before] = await tx.select().from(driftSettings).where(eq(driftSettings.ovenId, ovenId));
+      const row = { ovenId, ...params, updatedBy: actor.userId, updatedAt: new Date() };
+      await tx.insert(driftSettings).values(row).onConflictDoUpdate({ target: driftSettings.ovenId, set: row });
+      // New settings change every past EWMA/CUSUM value: rebuild from the history.
+      await recomputeOven(tx, ovenId);
+      await refreshHealth(tx, ovenId, new Date());
+      await recordAudit(tx, { actor, action: "drift.settings", entity: "drift_setting", entityId: ovenId, before: before ?? null, after: row });
+      return { ovenId };
+    }),
+});
+
+export const setBaselineByDatesDef = defineAction({
+  name: "setBaselineByDates",
+  permission: "baseline.manage",
+  schema: baselineByDatesSchema,
+  run: async ({ db, actor, input }) => {
+    const picked = await db
+      .select({ id: runs.id })
+      .from(runs)
+      .where(and(eq(runs.ovenId, input.ovenId), isNull(runs.deletedAt), gte(runs.runAt, input.from), lte(runs.runAt, input.to)))
+      .orderBy(asc(runs.runAt));
+    if (picked.length < 2) throw new AppError("invalid_input", "Pick dates that hold at least two runs of this oven.", { fields: { from: "fewer than two runs in this range" } });
+    if (!TRACKED_METRICS.includes(input.metric)) throw new AppError("invalid_input", "Unknown metric.", { fields: { metric: "unknown" } });
+    return setBaselineDef.run({ db, actor, input: { ovenId: input.ovenId, metric: input.metric, fromRunId: picked[0].id, toRunId: picked[picked.length - 1].id } });
   },
 });

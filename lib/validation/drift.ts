@@ -36,3 +36,19 @@ export const fleetQuerySchema = z.object({
   siteId: z.preprocess(blank, z.coerce.number().int().positive().optional()),
   lineId: z.preprocess(blank, z.coerce.number().int().positive().optional()),
 });
+
+export const driftSettingsSchema = z.object({
+  ovenId: z.coerce.number().int().positive(),
+  lambda: z.coerce.number({ error: "a number" }).gt(0, "more than 0").max(1, "at most 1"),
+  L: z.coerce.number({ error: "a number" }).min(1, "at least 1").max(5, "at most 5"),
+  cusumK: z.coerce.number({ error: "a number" }).min(0, "0 or more").max(3, "at most 3"),
+  cusumH: z.coerce.number({ error: "a number" }).gt(0, "more than 0").max(20, "at most 20"),
+});
+
+/** A baseline chosen by dates on the page: the oven's runs between them become the baseline. */
+export const baselineByDatesSchema = z.object({
+  ovenId: z.coerce.number().int().positive(),
+  metric: z.enum(TRACKED_METRICS),
+  from: z.coerce.date({ error: "a date" }),
+  to: z.coerce.date({ error: "a date" }),
+}).refine((v) => v.to > v.from, { path: ["to"], message: "must be after the start" });

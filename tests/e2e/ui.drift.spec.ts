@@ -69,4 +69,16 @@ test("an engineer logs a change, uploads runs after it, and reads its impact", a
   const dt = page.getByRole("region", { name: /ΔT at peak/ });
   await expect(dt.locator("svg.recharts-surface")).toBeVisible();
   await expect(dt).toContainText("Baseline");
+
+  // The engineer tunes this oven's detectors and picks a baseline by dates.
+  await page.waitForLoadState("networkidle");
+  await page.getByText("Drift settings and baseline").click();
+  await page.getByLabel("EWMA λ").fill("0.3");
+  await page.getByRole("button", { name: "Save settings" }).click();
+  await expect(page.getByText("Saved; the charts were rebuilt")).toBeVisible();
+  await page.getByText("Drift settings and baseline").click();
+  await page.getByLabel("Baseline from").fill(new Date(Date.now() - 120 * 86_400_000).toISOString().slice(0, 10));
+  await page.getByLabel("Baseline to").fill(new Date(Date.now() - 30 * 86_400_000).toISOString().slice(0, 10));
+  await page.getByRole("button", { name: "Use these runs as the baseline" }).click();
+  await expect(page.getByText(/Baseline set from \d+ runs/)).toBeVisible();
 });

@@ -67,6 +67,8 @@ export const ACTION_INPUTS: Record<string, (db: Db, role: Role) => Promise<Recor
     const rows = await db.select({ id: runs.id }).from(runs).where(eq(runs.ovenId, Number(await anyOven(db)))).orderBy(asc(runs.id)).limit(12);
     return { ovenId: String(await anyOven(db)), metric: "deltaTPeak", fromRunId: String(rows[0].id), toRunId: String(rows[11].id) };
   },
+  setDriftSettings: async (db) => ({ ovenId: String(await anyOven(db)), lambda: "0.25", L: "3", cusumK: "0.5", cusumH: "5" }),
+  setBaselineByDates: async (db) => ({ ovenId: String(await anyOven(db)), metric: "criticalSpread", from: "2020-01-01", to: "2100-01-01" }),
   createChange: async (db) => ({ ovenId: String(await anyOven(db)), at: new Date(Date.now() - 60_000).toISOString(), area: "baffle", summary: `Baffle ${uid()}`, after: "plate B" }),
   updateSubscription: async (db, role) => ({ userId: await userId(db, ownEmail(role)), kind: "fleet_digest", enabled: "on", sendAt: "07:30", day_MO: "on" }),
   updateMailTimeZone: async (db, role) => ({ userId: await userId(db, ownEmail(role)), timeZone: "Europe/Dublin" }),

@@ -5,14 +5,18 @@ import { HealthBadge } from "@/components/oven/health-badge";
 import { SafetyNote } from "@/components/oven/safety-note";
 import { requirePermission } from "@/lib/session";
 import { HealthCharts } from "./health-charts";
+import { DriftControls } from "./drift-controls";
+import { driftParams } from "@/db/queries/drift";
+import { can } from "@/lib/permissions";
 
 export const metadata = { title: "Health" };
 
 export default async function OvenHealth({ params }: { params: Promise<{ ovenId: string }> }) {
-  await requirePermission("fleet.read");
+  const actor = await requirePermission("fleet.read");
   const { oven } = await loadOvenForPage((await params).ovenId);
   const now = new Date();
-  const health = await computeOvenHealth(await getDb(), oven.id, now);
+  const db = await getDb();
+  const [health, settings] = await Promise.all([computeOvenHealth(db, oven.id, now), driftParams(db, oven.id)]);
   return (
     <div className="space-y-4">
       <section aria-labelledby="health-heading" className="card p-4">
@@ -25,6 +29,7 @@ export default async function OvenHealth({ params }: { params: Promise<{ ovenId:
           ))}
         </ul>
       </section>
+      {can(actor.role, "baseline.manage") ? <DriftControls ovenId={oven.id} params={settings} /> : null}
       <HealthCharts ovenId={oven.id} now={now.getTime()} />
       <SafetyNote kind="verdicts" />
     </div>
