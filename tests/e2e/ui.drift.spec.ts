@@ -31,6 +31,7 @@ test("a manager sees the fleet worst first, with L2-RF1 needing attention and wh
 });
 
 test("an engineer logs a change, uploads runs after it, and reads its impact", async ({ page }, info) => {
+  test.setTimeout(120_000);
   test.skip(info.project.name !== "laptop", "the phone project covers viewing");
   await signIn(page, "engineer");
   await page.goto("/fleet");
@@ -76,7 +77,10 @@ test("an engineer logs a change, uploads runs after it, and reads its impact", a
   await page.getByLabel("EWMA λ").fill("0.3");
   await page.getByRole("button", { name: "Save settings" }).click();
   await expect(page.getByText("Saved; the charts were rebuilt")).toBeVisible();
-  await page.getByText("Drift settings and baseline").click();
+  await expect(page.getByText(/EWMA λ = 0\.3, L = 3/)).toBeVisible();
+  // The panel stays open after saving; open it only if it closed.
+  const panel = page.locator("details", { hasText: "Drift settings and baseline" });
+  if ((await panel.getAttribute("open")) === null) await page.getByText("Drift settings and baseline").click();
   await page.getByLabel("Baseline from").fill(new Date(Date.now() - 120 * 86_400_000).toISOString().slice(0, 10));
   await page.getByLabel("Baseline to").fill(new Date(Date.now() - 30 * 86_400_000).toISOString().slice(0, 10));
   await page.getByRole("button", { name: "Use these runs as the baseline" }).click();

@@ -34,7 +34,7 @@ function describe(t: TrendResponse) {
   return parts.join(" ");
 }
 
-export function HealthCharts({ ovenId, now }: { ovenId: number; now: number }) {
+export function HealthCharts({ ovenId, now, params }: { ovenId: number; now: number; params: { lambda: number; L: number; cusumK: number; cusumH: number } }) {
   const [months, setMonths] = useState(6);
   const from = new Date(now - months * 30.44 * 86_400_000).toISOString().slice(0, 10);
   const results = useQueries({ queries: TRACKED_METRICS.map((m) => ({ queryKey: ["trend", ovenId, m, from], queryFn: () => fetchTrend(ovenId, m, from) })) });
@@ -73,7 +73,7 @@ export function HealthCharts({ ovenId, now }: { ovenId: number; now: number }) {
         );
       })}
       <p className="text-xs text-ink-muted">
-        Limits: individuals ±3σ with σ = average moving range ÷ 1.128; EWMA λ = 0.2, L = 3 with exact limits; CUSUM k = 0.5σ, h = 5σ. A change&apos;s effect is proved on its{" "}
+        Limits: individuals ±3σ with σ = average moving range ÷ 1.128; EWMA λ = {params.lambda}, L = {params.L} with exact limits; CUSUM k = {params.cusumK}σ, h = {params.cusumH}σ. A change&apos;s effect is proved on its{" "}
         <Link href={`/ovens/${ovenId}/changes`} className="underline">
           Changes
         </Link>{" "}

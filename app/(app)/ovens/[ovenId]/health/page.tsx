@@ -30,7 +30,7 @@ export default async function OvenHealth({ params }: { params: Promise<{ ovenId:
         </ul>
       </section>
       {can(actor.role, "baseline.manage") ? <DriftControls ovenId={oven.id} params={settings} /> : null}
-      <HealthCharts ovenId={oven.id} now={now.getTime()} />
+      <HealthCharts ovenId={oven.id} now={now.getTime()} params={settings} />
       <SafetyNote kind="verdicts" />
     </div>
   );
