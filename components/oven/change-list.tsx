@@ -4,7 +4,9 @@ import { CHANGE_AREA_LABELS } from "@/lib/validation/change";
 import { formatDateTime } from "@/lib/format";
 
 // The modification log as a timeline, newest first. Used on the oven page and the fleet-wide list.
-export function ChangeList({ rows, timeZone, showOven = false }: { rows: ChangeListRow[]; timeZone: string; showOven?: boolean }) {
+type Attachment = { id: number; changeId: number; fileName: string; contentType: string };
+
+export function ChangeList({ rows, timeZone, showOven = false, attachments = [] }: { rows: ChangeListRow[]; timeZone: string; showOven?: boolean; attachments?: Attachment[] }) {
   return (
     <ol className="grid gap-2">
       {rows.map(({ change: c, oven, author }) => (
@@ -28,6 +30,19 @@ export function ChangeList({ rows, timeZone, showOven = false }: { rows: ChangeL
             <span className="font-medium">{c.after}</span>
           </p>
           {c.reason ? <p className="mt-1 text-sm text-ink-soft">{c.reason}</p> : null}
+          {attachments.some((a) => a.changeId === c.id) ? (
+            <ul className="mt-2 flex flex-wrap gap-2" aria-label="Photos and documents">
+              {attachments
+                .filter((a) => a.changeId === c.id)
+                .map((a) => (
+                  <li key={a.id}>
+                    <a href={`/api/v1/change-attachments/${a.id}`} className="inline-flex min-h-11 items-center rounded-lg border border-paper-line px-3 text-sm underline">
+                      {a.contentType === "application/pdf" ? "Document" : "Photo"}: {a.fileName}
+                    </a>
+                  </li>
+                ))}
+            </ul>
+          ) : null}
           <p className="mt-1 flex flex-wrap items-center justify-between gap-2 text-xs text-ink-muted">
             <span>
               Logged by {author?.name ?? author?.email ?? "unknown"}

@@ -1,7 +1,9 @@
 import "server-only";
 import { and, asc, desc, eq, gte, lte, type SQL } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
-import { changes, type ChangeRow } from "../schema/changes";
+import { changeAttachments, changes, type ChangeRow } from "../schema/changes";
+import { inArray } from "drizzle-orm";
+import { storeSniffedUpload } from "@/lib/uploads/store";
 import { ovens } from "../schema/fleet";
 import { users } from "../schema/users";
 import { recordAudit } from "./audit";
@@ -9,7 +11,12 @@ import type { Actor } from "@/lib/actor";
 import { notFound } from "@/lib/errors";
 import type { ChangeCreateInput, ChangeFilter } from "@/lib/validation/change";
 
-export async function createChange(db: Db, ovenId: number, input: ChangeCreateInput, actor: Actor): Promise<ChangeRow> {
+type Upload = { name: string; bytes: Uint8Array };
+
+/** Logs a change with its photos and documents; a refused file stops it before anything is written. */
+export async function createChange(db: Db, ovenId: number, input: ChangeCreateInput, actor: Actor, files: Upload[] = []): Promise<ChangeRow> {
+  const stored: Awaited<ReturnType<typeof storeSniffedUpload>>[] = [];
+  for (const f of files) stored.push(await storeSniffedUpload(f));
   return db.transaction(async (tx) => {
     const [oven] = await tx.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId)).limit(1);
     if (!oven) throw notFound("That oven");
@@ -17,7 +24,8 @@ export async function createChange(db: Db, ovenId: number, input: ChangeCreateIn
       .insert(changes)
       .values({ ovenId, at: input.at, area: input.area, summary: input.summary, before: input.before ?? null, after: input.after, reason: input.reason ?? null, workOrderId: input.workOrderId ?? null, createdBy: actor.userId })
       .returning();
-    await recordAudit(tx, { actor, action: "change.create", entity: "oven_change", entityId: row.id, after: row });
+    for (const f of stored) await tx.insert(changeAttachments).values({ changeId: row.id, ...f, uploadedBy: actor.userId });
+    await recordAudit(tx, { actor, action: "change.create", entity: "oven_change", entityId: row.id, after: { ...row, attachments: stored.map((f) => f.fileName) } });
     return row;
   });
 }
@@ -64,3 +72,24 @@ export function changeJson(row: ChangeListRow) {
   };
 }
 export type ChangeJson = ReturnType<typeof changeJson>;
+
+export async function addChangeAttachment(db: Db, changeId: number, file: Upload, actor: Actor) {
+  const [c] = await db.select({ id: changes.id }).from(changes).where(eq(changes.id, changeId));
+  if (!c) throw notFound("That change");
+  const f = await storeSniffedUpload(file);
+  return db.transaction(async (tx) => {
+    const [row] = await tx.insert(changeAttachments).values({ changeId, ...f, uploadedBy: actor.userId }).returning();
+    await recordAudit(tx, { actor, action: "change.attach", entity: "oven_change", entityId: changeId, after: row });
+    return { id: row.id, fileName: row.fileName, contentType: row.contentType, sizeBytes: row.sizeBytes };
+  });
+}
+
+export async function attachmentsFor(db: DbOrTx, changeIds: number[]) {
+  if (!changeIds.length) return [];
+  return db.select().from(changeAttachments).where(inArray(changeAttachments.changeId, changeIds));
+}
+
+export async function getChangeAttachment(db: DbOrTx, id: number) {
+  const [row] = await db.select().from(changeAttachments).where(eq(changeAttachments.id, id));
+  return row ?? null;
+}

@@ -1,7 +1,4 @@
 import "server-only";
-import fs from "node:fs/promises";
-import path from "node:path";
-import { createHash } from "node:crypto";
 import { asc, eq, sql } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { users } from "../schema/users";
@@ -9,9 +6,8 @@ import { workOrderAttachments, workOrderComments, workOrders } from "../schema/m
 import { recordAudit } from "./audit";
 import type { Actor } from "@/lib/actor";
 import { AppError, notFound } from "@/lib/errors";
-import { env } from "@/lib/env";
 import { parseMentions } from "@/lib/maintenance/mentions";
-import { MAX_UPLOAD_BYTES, sniffFileType } from "@/lib/uploads/file-type";
+import { storeSniffedUpload } from "@/lib/uploads/store";
 
 // Photos, documents and comments on a work order. Each marks the order as touched.
 
@@ -20,27 +16,16 @@ async function assertOrder(db: DbOrTx, id: number) {
   if (!o) throw notFound("That work order");
 }
 
-export function uploadPath(sha256: string) {
-  return path.resolve(env().UPLOAD_DIR, sha256);
-}
+export { uploadPath } from "@/lib/uploads/store";
 
 /** Stores the bytes under their SHA-256 (the same photo twice is stored once). */
 export async function addAttachment(db: Db, workOrderId: number, file: { name: string; bytes: Uint8Array }, actor: Actor) {
   await assertOrder(db, workOrderId);
-  if (file.bytes.byteLength === 0) throw new AppError("invalid_file", "file: the file is empty.", { fields: { file: "is empty" } });
-  if (file.bytes.byteLength > MAX_UPLOAD_BYTES) {
-    throw new AppError("file_too_large", `file: ${(file.bytes.byteLength / 1048576).toFixed(1)} MB is over the 10 MB limit; send a smaller photo.`, { fields: { file: "over 10 MB" } });
-  }
-  const type = sniffFileType(file.bytes);
-  if (!type) throw new AppError("unsupported_file", "file: only JPEG, PNG or WebP photos and PDF documents can be attached.", { fields: { file: "not a JPEG, PNG, WebP or PDF" } });
-  const sha256 = createHash("sha256").update(file.bytes).digest("hex");
-  await fs.mkdir(path.resolve(env().UPLOAD_DIR), { recursive: true });
-  await fs.writeFile(uploadPath(sha256), file.bytes);
-  const fileName = file.name.replace(/[^\w.\- ]+/g, "_").slice(0, 120) || `upload.${type.ext}`;
+  const { sha256, fileName, contentType, sizeBytes } = await storeSniffedUpload(file);
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(workOrderAttachments)
-      .values({ workOrderId, sha256, fileName, contentType: type.contentType, sizeBytes: file.bytes.byteLength, uploadedById: actor.userId })
+      .values({ workOrderId, sha256, fileName, contentType, sizeBytes, uploadedById: actor.userId })
       .returning();
     await tx.update(workOrders).set({ touched: true }).where(eq(workOrders.id, workOrderId));
     await recordAudit(tx, { actor, action: "workorder.attach", entity: "work_order", entityId: workOrderId, after: row });

@@ -28,3 +28,19 @@ export const changes = sqliteTable(
 );
 
 export type ChangeRow = typeof changes.$inferSelect;
+
+/** Photos and documents of a change (stored by content hash under UPLOAD_DIR). */
+export const changeAttachments = sqliteTable(
+  "oven_change_attachment",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    changeId: integer("change_id").notNull().references(() => changes.id, { onDelete: "cascade" }),
+    sha256: text("sha256").notNull(),
+    fileName: text("file_name").notNull(),
+    contentType: text("content_type").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    uploadedBy: text("uploaded_by").references(() => users.id),
+    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().$defaultFn(() => new Date()),
+  },
+  (t) => [index("oven_change_attachment_change_idx").on(t.changeId)],
+);

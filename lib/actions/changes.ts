@@ -6,10 +6,12 @@ import { changeCreateSchema } from "@/lib/validation/change";
 export const createChangeDef = defineAction({
   name: "createChange",
   permission: "change.create",
-  schema: z.object({ ovenId: z.coerce.number().int().positive() }).and(changeCreateSchema),
+  schema: z.object({ ovenId: z.coerce.number().int().positive(), attachment: z.unknown().optional() }).and(changeCreateSchema),
   run: async ({ db, actor, input }) => {
-    const { ovenId, ...rest } = input;
-    const row = await createChange(db, ovenId, rest, actor);
+    const { ovenId, attachment, ...rest } = input;
+    // An empty file input arrives as a File of size 0: no attachment.
+    const files = attachment instanceof File && attachment.size > 0 ? [{ name: attachment.name, bytes: new Uint8Array(await attachment.arrayBuffer()) }] : [];
+    const row = await createChange(db, ovenId, rest, actor, files);
     return { id: row.id, ovenId };
   },
 });

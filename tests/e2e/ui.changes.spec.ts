@@ -14,9 +14,15 @@ test("an engineer logs a firmware change; Setup shows it as the current configur
   await page.getByRole("button", { name: "Log the change" }).click();
   await expect(page.getByText("After: is required")).toBeVisible();
   await page.getByLabel("After", { exact: true }).fill("2.4.0");
+  await page.getByLabel("Photo or document (optional)").setInputFiles("tests/fixtures/checklist-photo.png");
   await page.getByRole("button", { name: "Log the change" }).click();
   await expect(page.getByText("Change logged")).toBeVisible();
-  await expect(page.locator("ol li", { hasText: "Controller firmware update" })).toContainText("2.3.1");
+  const logged = page.locator("ol li", { hasText: "Controller firmware update" });
+  await expect(logged).toContainText("2.3.1");
+  const photo = logged.getByRole("link", { name: /Photo: checklist-photo\.png/ });
+  await expect(photo).toBeVisible();
+  const res = await page.request.get((await photo.getAttribute("href"))!);
+  expect(res.headers()["content-type"]).toBe("image/png");
   await page.screenshot({ path: "test-results/screenshots/laptop-engineer-changes.png", fullPage: true });
   await page.getByRole("navigation", { name: "Oven sections" }).getByRole("link", { name: "Setup" }).click();
   await expect(page.getByRole("region", { name: "Current configuration" }).or(page.locator("section", { hasText: "Current configuration" }))).toContainText("2.4.0");

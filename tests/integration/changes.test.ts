@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { eq } from "drizzle-orm";
 import { actorFor, createTestDb } from "./test-db";
-import { createChange, currentConfiguration, listChanges } from "@/db/queries/changes";
+import { attachmentsFor, createChange, currentConfiguration, listChanges } from "@/db/queries/changes";
 import { changeCreateSchema } from "@/lib/validation/change";
 import { ovens } from "@/db/schema/fleet";
 import { auditLog } from "@/db/schema/audit";
@@ -51,6 +51,23 @@ describe("the modification log", () => {
     const engineer = await actorFor(t.db, "engineer");
     const before = (await listChanges(t.db)).length;
     await expect(createChange(t.db, 999999, input({ at: "2026-01-01T00:00:00Z", area: "fan", summary: "Ghost", after: "x" }), engineer)).rejects.toThrow(/not found/);
+    expect((await listChanges(t.db)).length).toBe(before);
+  });
+});
+
+describe("photos and documents of a change", () => {
+  it("stores a photo with the change, and refuses a file that is not an image or PDF without writing the change", async () => {
+    const fs = await import("node:fs");
+    const engineer = await actorFor(t.db, "engineer");
+    const png = new Uint8Array(fs.readFileSync("tests/fixtures/checklist-photo.png"));
+    const row = await createChange(t.db, ovenId, input({ at: "2026-06-01T09:00:00Z", area: "exhaust", summary: "Exhaust duct cleaned", after: "clean duct" }), engineer, [{ name: "duct.png", bytes: png }]);
+    const files = await attachmentsFor(t.db, [row.id]);
+    expect(files.map((f) => [f.fileName, f.contentType, f.sizeBytes])).toEqual([["duct.png", "image/png", png.byteLength]]);
+    const before = (await listChanges(t.db)).length;
+    // A script renamed to .png is still text: checked by content, not by name (OWASP file-upload guidance).
+    await expect(
+      createChange(t.db, ovenId, input({ at: "2026-06-02T09:00:00Z", area: "exhaust", summary: "Sneaky", after: "x" }), engineer, [{ name: "photo.png", bytes: new TextEncoder().encode("#!/bin/sh\nrm -rf /\n") }]),
+    ).rejects.toMatchObject({ code: "unsupported_file" });
     expect((await listChanges(t.db)).length).toBe(before);
   });
 });

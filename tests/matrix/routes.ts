@@ -203,6 +203,14 @@ ROUTE_MATRIX.push(
   { method: "GET", file: "app/api/v1/ovens/[ovenId]/trends/route.ts", path: ({ ovenId }) => `/api/v1/ovens/${ovenId}/trends?metric=deltaTPeak`, expect: all(200) },
   { method: "GET", file: "app/api/v1/changes/[changeId]/impact/route.ts", path: "/api/v1/changes/1/impact?metric=deltaTPeak", expect: all(200) }, // the seed's first change: LAB-B1's baffle
   { method: "GET", file: "app/api/v1/fleet/route.ts", path: "/api/v1/fleet", expect: all(200) },
+  {
+    method: "POST",
+    file: "app/api/v1/changes/[changeId]/attachments/route.ts",
+    path: "/api/v1/changes/1/attachments",
+    multipart: "png",
+    expect: { anonymous: 401, viewer: 403, technician: 403, engineer: 201, manager: 403, admin: 403 },
+  },
+  { method: "GET", file: "app/api/v1/change-attachments/[attachmentId]/route.ts", path: "/api/v1/change-attachments/1", expect: all(200) },
   { method: "GET", file: "app/api/v1/alerts/route.ts", path: "/api/v1/alerts?status=all", expect: all(200) },
   {
     method: "POST",

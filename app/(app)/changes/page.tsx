@@ -1,5 +1,5 @@
 import { getDb } from "@/db";
-import { listChanges } from "@/db/queries/changes";
+import { attachmentsFor, listChanges } from "@/db/queries/changes";
 import { listOvens } from "@/db/queries/ovens";
 import { listSitesWithLines } from "@/db/queries/sites";
 import { PageHeader } from "@/components/ui/page-header";
@@ -18,6 +18,7 @@ export default async function ChangesPage({ searchParams }: { searchParams: Prom
   const filter = parsed.success ? parsed.data : {};
   const db = await getDb();
   const [rows, ovens, sites] = await Promise.all([listChanges(db, filter), listOvens(db), listSitesWithLines(db)]);
+  const files = await attachmentsFor(db, rows.map((r) => r.change.id));
   const tz = sites[0]?.timeZone ?? "UTC";
   const select = "min-h-11 rounded-lg border border-paper-line bg-paper-raised px-3 text-sm";
   return (
@@ -59,7 +60,7 @@ export default async function ChangesPage({ searchParams }: { searchParams: Prom
           Clear
         </a>
       </form>
-      {rows.length ? <ChangeList rows={rows} timeZone={tz} showOven /> : <EmptyState title="No changes match">Clear a filter, or log a change from an oven&apos;s Changes section.</EmptyState>}
+      {rows.length ? <ChangeList rows={rows} attachments={files} timeZone={tz} showOven /> : <EmptyState title="No changes match">Clear a filter, or log a change from an oven&apos;s Changes section.</EmptyState>}
     </>
   );
 }

@@ -44,6 +44,7 @@ export function ChangeForm({ ovenId }: { ovenId: number }) {
             <TextAreaField label="Why" name="reason" error={fields?.reason} />
           </div>
           <TextField label="Work order number (optional)" name="workOrderId" inputMode="numeric" error={fields?.workOrderId} />
+          <TextField label="Photo or document (optional)" name="attachment" id="change-attachment" type="file" accept="image/jpeg,image/png,image/webp,application/pdf" hint="JPEG, PNG, WebP or PDF, up to 10 MB." error={fields?.attachment ?? fields?.file} />
           <div className="flex items-end">
             <Button variant="primary" type="submit" disabled={pending}>
               {pending ? "Logging…" : "Log the change"}

@@ -1,7 +1,7 @@
 import { EmptyState } from "@/components/ui/empty-state";
 import { ChangeList } from "@/components/oven/change-list";
 import { loadOvenForPage } from "@/db/queries/oven-page";
-import { listChanges } from "@/db/queries/changes";
+import { attachmentsFor, listChanges } from "@/db/queries/changes";
 import { getDb } from "@/db";
 import { requirePermission } from "@/lib/session";
 import { can } from "@/lib/permissions";
@@ -12,7 +12,9 @@ export const metadata = { title: "Changes" };
 export default async function OvenChanges({ params }: { params: Promise<{ ovenId: string }> }) {
   const actor = await requirePermission("change.read");
   const { oven, site } = await loadOvenForPage((await params).ovenId);
-  const rows = await listChanges(await getDb(), { ovenId: oven.id });
+  const db = await getDb();
+  const rows = await listChanges(db, { ovenId: oven.id });
+  const files = await attachmentsFor(db, rows.map((r) => r.change.id));
   return (
     <div className="space-y-6">
       {can(actor.role, "change.create") ? (
@@ -28,7 +30,7 @@ export default async function OvenChanges({ params }: { params: Promise<{ ovenId
           Modification log
         </h2>
         {rows.length ? (
-          <ChangeList rows={rows} timeZone={site.timeZone} />
+          <ChangeList rows={rows} attachments={files} timeZone={site.timeZone} />
         ) : (
           <EmptyState title="No changes logged">
             Hardware and firmware changes to {oven.tag} — fans, baffles, heaters, controller firmware — are logged here with what they
