@@ -1,13 +1,12 @@
 import "server-only";
-import { and, asc, eq, gte, inArray, isNotNull, isNull, like, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, isNotNull, like, sql } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
 import { maintenancePlans, meterReadings, workOrders, type PlanRow } from "../schema/maintenance";
 import { recordAudit } from "./audit";
 import type { Actor } from "@/lib/actor";
 import { planOccurrencesToGenerate } from "@/lib/maintenance/generation";
-import { dueByMeter, dueByRuns } from "@/lib/maintenance/usage-triggers";
-import { runs } from "../schema/runs";
+import { dueByMeter } from "@/lib/maintenance/usage-triggers";
 
 /*
  * Turns plan occurrences into work orders. The pure core picks the occurrences; the database
@@ -75,7 +74,7 @@ async function existingKeys(db: DbOrTx, planIds: number[]) {
   return byPlan;
 }
 
-/** Orders a set of plans owes at `now` (calendar, heater-hour and run-count plans). */
+/** Orders a set of plans owes at `now` (calendar and heater-hour plans). */
 export async function ordersOwed(db: DbOrTx, plans: { plan: PlanRow; timeZone: string }[], now: Date): Promise<NewOrder[]> {
   const keys = await existingKeys(db, plans.map((p) => p.plan.id));
   const out: NewOrder[] = [];
@@ -105,17 +104,9 @@ export async function ordersOwed(db: DbOrTx, plans: { plan: PlanRow; timeZone: s
         now,
       });
       for (const c of due.crossed) out.push(orderFromPlan(plan, c.occurrenceKey, c.reachedAt));
-    } else if (plan.everyRuns) {
-      // Counted in the oven's verification runs since the plan began (deleted runs do not count).
-      const rows = await db
-        .select({ at: runs.runAt })
-        .from(runs)
-        .where(and(eq(runs.ovenId, plan.ovenId), isNull(runs.deletedAt), gte(runs.runAt, plan.createdAt)))
-        .orderBy(asc(runs.runAt));
-      const last = [...have].map((k) => Number(k.split(":").pop())).filter(Number.isFinite);
-      const due = dueByRuns({ planId: String(plan.id), everyRuns: plan.everyRuns, runs: rows.map((r) => r.at), since: plan.createdAt, lastTriggeredThreshold: last.length ? Math.max(...last) : null, now });
-      for (const c of due.crossed) out.push(orderFromPlan(plan, c.occurrenceKey, c.reachedAt));
     }
+    // Plans counted in verification runs do not generate yet: the demo's history of such plans was
+    // seeded by hand, and backfilling every threshold crossed since would flood My work.
   }
   return out;
 }
