@@ -6,6 +6,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { HealthBadge } from "@/components/oven/health-badge";
 import { buttonClass } from "@/components/ui/button";
+import { FilterSelect } from "@/components/ui/filter-select";
 import { requirePermission } from "@/lib/session";
 import { can } from "@/lib/permissions";
 import { alertQuerySchema } from "@/lib/validation/drift";
@@ -21,30 +22,12 @@ export default async function AlertsPage({ searchParams }: { searchParams: Promi
   const filter = q.success ? q.data : { status: "open" as const };
   const db = await getDb();
   const [rows, ovens] = await Promise.all([listAlerts(db, filter), listOvens(db)]);
-  const select = "min-h-11 rounded-lg border border-paper-line bg-paper-raised px-3 text-sm";
   return (
     <>
       <PageHeader title="Alerts" subtitle="Raised when an oven's health worsens. Acknowledge with a note; turn one into a drift investigation." />
       <form method="get" className="mb-4 flex flex-wrap items-end gap-3" aria-label="Filter alerts">
-        <label className="flex flex-col text-xs font-medium text-ink-muted">
-          Oven
-          <select name="ovenId" defaultValue={raw.ovenId ?? ""} className={select}>
-            <option value="">All ovens</option>
-            {ovens.map((o) => (
-              <option key={o.oven.id} value={o.oven.id}>
-                {o.oven.tag}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="flex flex-col text-xs font-medium text-ink-muted">
-          Status
-          <select name="status" defaultValue={filter.status} className={select}>
-            <option value="open">Open</option>
-            <option value="acknowledged">Acknowledged</option>
-            <option value="all">All</option>
-          </select>
-        </label>
+        <FilterSelect label="Oven" name="ovenId" defaultValue={raw.ovenId} anyLabel="All ovens" options={ovens.map((o) => ({ value: o.oven.id, label: o.oven.tag }))} />
+        <FilterSelect label="Status" name="status" defaultValue={filter.status} options={[{ value: "open", label: "Open" }, { value: "acknowledged", label: "Acknowledged" }, { value: "all", label: "All" }]} />
         <button className={buttonClass("secondary")}>Apply</button>
       </form>
       {rows.length === 0 ? (

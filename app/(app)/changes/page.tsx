@@ -6,6 +6,7 @@ import { PageHeader } from "@/components/ui/page-header";
 import { EmptyState } from "@/components/ui/empty-state";
 import { ChangeList } from "@/components/oven/change-list";
 import { buttonClass } from "@/components/ui/button";
+import { FilterSelect, filterControl } from "@/components/ui/filter-select";
 import { requirePermission } from "@/lib/session";
 import { CHANGE_AREA_LABELS, CHANGE_AREA_VALUES, changeFilterSchema } from "@/lib/validation/change";
 
@@ -20,40 +21,19 @@ export default async function ChangesPage({ searchParams }: { searchParams: Prom
   const [rows, ovens, sites] = await Promise.all([listChanges(db, filter), listOvens(db), listSitesWithLines(db)]);
   const files = await attachmentsFor(db, rows.map((r) => r.change.id));
   const tz = sites[0]?.timeZone ?? "UTC";
-  const select = "min-h-11 rounded-lg border border-paper-line bg-paper-raised px-3 text-sm";
   return (
     <>
       <PageHeader title="Changes" subtitle="Every hardware and firmware change across the fleet, newest first." />
       <form method="get" className="no-print mb-6 flex flex-wrap items-end gap-3" aria-label="Filter the changes">
-        <label className="flex flex-col text-xs font-medium text-ink-muted">
-          Oven
-          <select name="ovenId" defaultValue={raw.ovenId ?? ""} className={select}>
-            <option value="">All ovens</option>
-            {ovens.map((o) => (
-              <option key={o.oven.id} value={o.oven.id}>
-                {o.oven.tag}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="flex flex-col text-xs font-medium text-ink-muted">
-          Area
-          <select name="area" defaultValue={raw.area ?? ""} className={select}>
-            <option value="">All areas</option>
-            {CHANGE_AREA_VALUES.map((a) => (
-              <option key={a} value={a}>
-                {CHANGE_AREA_LABELS[a]}
-              </option>
-            ))}
-          </select>
-        </label>
+        <FilterSelect label="Oven" name="ovenId" defaultValue={raw.ovenId} anyLabel="All ovens" options={ovens.map((o) => ({ value: o.oven.id, label: o.oven.tag }))} />
+        <FilterSelect label="Area" name="area" defaultValue={raw.area} anyLabel="All areas" options={CHANGE_AREA_VALUES.map((a) => ({ value: a, label: CHANGE_AREA_LABELS[a] }))} />
         <label className="flex flex-col text-xs font-medium text-ink-muted">
           From
-          <input type="date" name="from" defaultValue={raw.from ?? ""} className={select} />
+          <input type="date" name="from" defaultValue={raw.from ?? ""} className={filterControl} />
         </label>
         <label className="flex flex-col text-xs font-medium text-ink-muted">
           To
-          <input type="date" name="to" defaultValue={raw.to ?? ""} className={select} />
+          <input type="date" name="to" defaultValue={raw.to ?? ""} className={filterControl} />
         </label>
         <button className={buttonClass("secondary")}>Apply</button>
         <a href="/changes" className="min-h-11 px-2 py-3 text-sm text-ink-soft underline">
