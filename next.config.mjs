@@ -28,6 +28,8 @@ const nextConfig = {
   serverExternalPackages: ["@libsql/client", "libsql", "smtp-server", "mailparser", "nodemailer", "bcryptjs"],
   experimental: {
     serverActions: { bodySizeLimit: "25mb" },
+    // Pages' POSTs still pass the proxy; keep its buffer above the largest accepted upload.
+    proxyClientMaxBodySize: "25mb",
   },
   async headers() {
     return [{ source: "/:path*", headers: securityHeaders }];

@@ -3,7 +3,7 @@ import { NextResponse, type NextRequest } from "next/server";
 // The proxy only sends signed-out visitors to the sign-in page. It is not a permission check:
 // every page, action and route handler checks the role itself on the server.
 // The mail preview is a route handler that answers 401/403 itself (withApi).
-const PUBLIC = ["/sign-in", "/invite", "/unsubscribe", "/api/", "/dev/mail/preview/", "/_next/", "/favicon.svg"];
+const PUBLIC = ["/sign-in", "/invite", "/unsubscribe", "/dev/mail/preview/", "/_next/", "/favicon.svg"];
 
 export function proxy(req: NextRequest) {
   const { pathname, search } = req.nextUrl;
@@ -23,4 +23,6 @@ export function proxy(req: NextRequest) {
   return NextResponse.redirect(url);
 }
 
-export const config = { matcher: ["/((?!_next/static|_next/image).*)"] };
+// Route handlers under /api answer 401 themselves, and a proxy in front of them would buffer
+// (and cut at its body limit) every upload: the matcher leaves them out.
+export const config = { matcher: ["/((?!api/|_next/static|_next/image).*)"] };

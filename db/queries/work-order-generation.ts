@@ -1,12 +1,13 @@
 import "server-only";
-import { and, asc, eq, inArray, isNotNull, like, sql } from "drizzle-orm";
+import { and, asc, eq, gte, inArray, isNotNull, isNull, like, lte, sql } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
 import { maintenancePlans, meterReadings, workOrders, type PlanRow } from "../schema/maintenance";
 import { recordAudit } from "./audit";
 import type { Actor } from "@/lib/actor";
 import { planOccurrencesToGenerate } from "@/lib/maintenance/generation";
-import { dueByMeter } from "@/lib/maintenance/usage-triggers";
+import { dueByMeter, dueByRuns } from "@/lib/maintenance/usage-triggers";
+import { runs } from "../schema/runs";
 
 /*
  * Turns plan occurrences into work orders. The pure core picks the occurrences; the database
@@ -74,7 +75,7 @@ async function existingKeys(db: DbOrTx, planIds: number[]) {
   return byPlan;
 }
 
-/** Orders a set of plans owes at `now` (calendar and heater-hour plans). */
+/** Orders a set of plans owes at `now` (calendar, heater-hour and run-count plans). */
 export async function ordersOwed(db: DbOrTx, plans: { plan: PlanRow; timeZone: string }[], now: Date): Promise<NewOrder[]> {
   const keys = await existingKeys(db, plans.map((p) => p.plan.id));
   const out: NewOrder[] = [];
@@ -94,21 +95,40 @@ export async function ordersOwed(db: DbOrTx, plans: { plan: PlanRow; timeZone: s
         .where(and(eq(meterReadings.ovenId, plan.ovenId), eq(meterReadings.kind, "heater_hours")))
         .orderBy(asc(meterReadings.at));
       if (!readings.length) continue;
-      const last = [...have].map((k) => Number(k.split(":").pop())).filter(Number.isFinite);
       const due = dueByMeter({
         planId: String(plan.id),
         everyHours: plan.everyHeaterHours,
         readings,
         baselineValue: plan.meterBaseline ?? readings[0].value,
-        lastTriggeredThreshold: last.length ? Math.max(...last) : null,
+        lastTriggeredThreshold: lastThreshold(have),
         now,
       });
       for (const c of due.crossed) out.push(orderFromPlan(plan, c.occurrenceKey, c.reachedAt));
+    } else if (plan.everyRuns) {
+      const due = await dueByRunsForPlan(db, plan, have, now);
+      for (const c of due.crossed) out.push(orderFromPlan(plan, c.occurrenceKey, c.reachedAt));
     }
-    // Plans counted in verification runs do not generate yet: the demo's history of such plans was
-    // seeded by hand, and backfilling every threshold crossed since would flood My work.
   }
   return out;
+}
+
+/** The highest threshold among a plan's usage keys ("<plan>:runs:<n>"), or null when none. */
+export function lastThreshold(keys: Iterable<string>): number | null {
+  const values = [...keys].map((k) => Number(k.split(":").pop())).filter(Number.isFinite);
+  return values.length ? Math.max(...values) : null;
+}
+
+/**
+ * A run-count plan counts the oven's verification runs since the plan began (deleted runs do
+ * not count); each multiple of N is one occurrence with a stable key.
+ */
+export async function dueByRunsForPlan(db: DbOrTx, plan: PlanRow, keys: Set<string>, now: Date) {
+  const rows = await db
+    .select({ at: runs.runAt })
+    .from(runs)
+    .where(and(eq(runs.ovenId, plan.ovenId), isNull(runs.deletedAt), gte(runs.runAt, plan.createdAt), lte(runs.runAt, now)))
+    .orderBy(asc(runs.runAt));
+  return dueByRuns({ planId: String(plan.id), everyRuns: plan.everyRuns!, runs: rows.map((r) => r.at), since: plan.createdAt, lastTriggeredThreshold: lastThreshold(keys), now });
 }
 
 export async function activePlansWithZone(db: DbOrTx, planIds?: number[]) {

@@ -4,7 +4,7 @@ import type { Db, DbOrTx } from "../client";
 import { lines, ovens, sites } from "../schema/fleet";
 import { users } from "../schema/users";
 import { maintenancePlans, meterReadings, workOrderParts, workOrders, type PlanRow } from "../schema/maintenance";
-import { numberPendingOrders, pendingNumber, type NewOrder } from "../queries/work-order-generation";
+import { dueByRunsForPlan, numberPendingOrders, pendingNumber, type NewOrder } from "../queries/work-order-generation";
 import { REFLOW_PM_TEMPLATES, requiresLockout, type PmTemplate } from "@/lib/maintenance/pm-templates";
 import { buildRrule } from "@/lib/maintenance/rrule-builder";
 import { planOccurrencesToGenerate } from "@/lib/maintenance/generation";
@@ -59,7 +59,7 @@ async function ensurePlans(tx: DbOrTx, oven: { id: number; tag: string; isLab: b
 }
 
 /** How one past order went: most on time, some late, a few never done (still overdue now). */
-function outcome(o: NewOrder, plan: PlanRow, now: Date, rand: () => number, techId: string | null): NewOrder {
+function outcome(o: NewOrder, plan: PlanRow, now: Date, rand: () => number, techId: string | null, usage = false): NewOrder {
   const due = (o.dueAt as Date).getTime();
   if (due >= now.getTime()) return { ...o, assigneeId: rand() < 0.5 ? techId : null };
   const age = (now.getTime() - due) / DAY;
@@ -72,7 +72,9 @@ function outcome(o: NewOrder, plan: PlanRow, now: Date, rand: () => number, tech
   if (r < overdueChance) return { ...o, assigneeId: rand() < 0.6 ? techId : null };
   if (r < overdueChance + 0.015) return { ...o, state: "cancelled", touched: true, notes: "Line down for changeover; skipped." };
   const late = r > 0.9;
-  const completed = late ? due + (2 + rand() * 70) * 3_600_000 : due - (10 + rand() * 110) * 60_000;
+  // A usage order only exists once its threshold is reached, so it is done after that moment.
+  const planned = late ? due + (2 + rand() * 70) * 3_600_000 : usage ? due + (20 + rand() * 100) * 60_000 : due - (10 + rand() * 110) * 60_000;
+  const completed = Math.min(planned, now.getTime() - 5 * 60_000); // never in the future
   const results = Object.fromEntries(plan.checklist.map((c) => [c.id, { ok: true }]));
   return {
     ...o,
@@ -162,6 +164,8 @@ export async function seedMaintenance(db: Db, { now: rawNow = new Date() }: { no
   const counts = { plans: 0, workOrders: 0, meterReadings: 0 };
   await db.transaction(async (tx) => {
     const rand = seededRandom(20_260_402);
+    // Run-count plans draw from their own stream, so the calendar history stays as it was.
+    const usageRand = seededRandom(20_260_403);
     const orders: NewOrder[] = [];
     for (const oven of ovenRows) {
       const { plans, created } = await ensurePlans(tx, oven, createdAt, ids.engineer);
@@ -171,6 +175,20 @@ export async function seedMaintenance(db: Db, { now: rawNow = new Date() }: { no
         (await tx.select({ k: workOrders.occurrenceKey }).from(workOrders).where(and(inArray(workOrders.planId, planIds)))).map((r) => r.k!),
       );
       for (const plan of plans) {
+        if (plan.everyRuns) {
+          // Counted in the runs seeded above: one order per N runs since the plan began.
+          const due = await dueByRunsForPlan(tx, plan, new Set([...taken].filter((k) => k.startsWith(`${plan.id}:`))), now);
+          for (const c of due.crossed) {
+            taken.add(c.occurrenceKey);
+            const base: NewOrder = {
+              number: pendingNumber(), planId: plan.id, occurrenceKey: c.occurrenceKey, ovenId: oven.id, title: plan.title, kind: plan.kind,
+              dueAt: c.reachedAt, checklist: plan.checklist, safetyLockout: plan.safetyLockout, assigneeId: plan.assigneeId,
+              createdAt: c.reachedAt, updatedAt: c.reachedAt,
+            };
+            orders.push(outcome(base, plan, now, usageRand, plan.assigneeId ?? ids.tech, true));
+          }
+          continue;
+        }
         if (!plan.rrule || !plan.dtstartLocal) continue;
         const calendarPlan = { id: String(plan.id), rrule: plan.rrule, dtstartLocal: plan.dtstartLocal, timeZone: oven.timeZone, lookAheadDays: plan.lookAheadDays, createdAt: plan.createdAt };
         // One call returns at most 500 occurrences (a daily plan has more over 18 months): repeat.

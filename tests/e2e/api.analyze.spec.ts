@@ -73,6 +73,25 @@ test("an oversized upload is 413, a missing file and a bad option are 400 naming
   expect(json.status()).toBe(415);
 });
 
+test("a logger file over 10 MB (inside the 20 MB limit) is read whole", async ({ request }) => {
+  // 0.05 s sampling of eight probes through a 25 → 245 → 60 °C profile, about 12 MB.
+  const n = 170_000;
+  const lines = ["time;TC1;TC2;TC3;TC4;TC5;TC6;TC7;TC8"];
+  for (let i = 0; i < n; i++) {
+    const t = i * 0.05;
+    const base = t < 5000 ? 25 + (220 * t) / 5000 : 245 - (185 * (t - 5000)) / 3500;
+    lines.push([t.toFixed(2), ...Array.from({ length: 8 }, (_, c) => (base - c * 0.5).toFixed(3))].join(";"));
+  }
+  const body = Buffer.from(lines.join("\n"));
+  expect(body.length).toBeGreaterThan(11 * 1024 * 1024);
+  const res = await request.post("/api/v1/profiles/analyze", { headers: auth(), multipart: upload("long.csv", body) });
+  expect(res.status(), (await res.text()).slice(0, 300)).toBe(200);
+  const out = await res.json();
+  expect(out.meta.rows).toBe(n);
+  expect(out.board.peakMax).toBeCloseTo(245, 1);
+  expect(out.board.deltaTPeak).toBeCloseTo(3.5, 3);
+});
+
 test("without a token or session the endpoint answers 401", async ({ request }) => {
   const res = await request.post("/api/v1/profiles/analyze", { multipart: upload("run.csv", fs.readFileSync(FIXTURE)) });
   expect(res.status()).toBe(401);
