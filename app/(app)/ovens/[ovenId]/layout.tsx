@@ -40,9 +40,11 @@ export default async function OvenLayout({ children, params }: { children: React
           ) : null}
         </div>
         <div className="no-print flex flex-wrap gap-2">
-          <Link href={`/ovens/${oven.id}/label`} className={buttonClass("secondary")}>
+          {/* A full page load: the label page has no shell, and a client-side move between the two
+              route groups under /ovens/[ovenId] left the browser where it was. */}
+          <a href={`/ovens/${oven.id}/label`} className={buttonClass("secondary")}>
             QR label
-          </Link>
+          </a>
           {can(actor.role, "oven.update") ? (
             <Link href={`/ovens/${oven.id}/edit`} className={buttonClass("secondary")}>
               Edit oven
