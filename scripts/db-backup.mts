@@ -3,7 +3,7 @@
 // files it refers to: <file>, <file>.uploads/ and <file>.json (checksum, row counts, file counts).
 import path from "node:path";
 import { parseArgs } from "node:util";
-import { backupDatabase, OpsError } from "../db/ops/backup";
+import { backupDatabase, isOpsError } from "../db/ops/backup";
 import { env } from "../lib/env";
 
 const { values } = parseArgs({ options: { out: { type: "string" } } });
@@ -24,7 +24,7 @@ try {
     for (const m of b.uploads.missing.slice(0, 10)) console.warn(`  ${m}`);
   }
 } catch (err) {
-  if (!(err instanceof OpsError)) throw err;
+  if (!isOpsError(err)) throw err;
   console.error(err.message);
   process.exit(2);
 }

@@ -3,7 +3,7 @@
 // files of <file>.uploads/ that are missing. Refuses while the app has the database open
 // (--force skips that check); the current database is kept aside under a dated name.
 import { parseArgs } from "node:util";
-import { OpsError } from "../db/ops/backup";
+import { isOpsError } from "../db/ops/backup";
 import { restoreDatabase } from "../db/ops/restore";
 import { env } from "../lib/env";
 
@@ -24,7 +24,7 @@ try {
   }
   console.log("Start the app as usual; it applies any newer migrations on start.");
 } catch (err) {
-  if (!(err instanceof OpsError)) throw err;
+  if (!isOpsError(err)) throw err;
   console.error(err.message);
   process.exit(2);
 }

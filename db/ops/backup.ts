@@ -13,7 +13,15 @@ import { uploadReferences } from "./upload-references";
  * every file the snapshot refers to is already there to copy.
  */
 
-export class OpsError extends Error {}
+/** An expected refusal, printed as its message alone. */
+export class OpsError extends Error {
+  override name = "OpsError";
+}
+
+/** By name, not instanceof: a script (ESM) and these modules (CJS under tsx) may each load their own copy of the class. */
+export function isOpsError(err: unknown): err is OpsError {
+  return err instanceof Error && err.name === "OpsError";
+}
 
 export type BackupManifest = {
   createdAt: string;
@@ -68,7 +76,7 @@ export async function inspectDatabase(file: string) {
     const migrations = Number((await client.execute("select count(*) as n from __drizzle_migrations")).rows[0].n);
     return { migrations, tables: await tableCounts(client), references: await uploadReferences(client) };
   } catch (err) {
-    if (err instanceof OpsError) throw err;
+    if (isOpsError(err)) throw err;
     throw new OpsError(`${file} cannot be read as a database: ${(err as Error).message}`);
   } finally {
     client.close();
