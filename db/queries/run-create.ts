@@ -70,6 +70,9 @@ export async function createRun(db: Db, ovenId: number, input: RunUploadInput, f
         .insert(storedFiles)
         .values({ sha256: sha, size: file.bytes.length, mediaType: file.mediaType || "text/csv", path: written.path })
         .onConflictDoUpdate({ target: storedFiles.sha256, set: { purgedAt: null } });
+      // A run deleted meanwhile may have removed these bytes (they existed when written above);
+      // under this transaction's write lock they are put back before the row is committed.
+      writeContent(file.bytes, sha);
       const runId = await insertRun(
         tx,
         {
@@ -94,10 +97,13 @@ export async function createRun(db: Db, ovenId: number, input: RunUploadInput, f
     });
     return { id, prepared, fileSha256: sha };
   } catch (err) {
-    // Only remove bytes this upload wrote and that no row refers to.
+    // Only remove bytes this upload wrote and that no row refers to (checked under the write
+    // lock, so an upload of the same file committing meanwhile keeps them).
     if (written.created) {
-      const [stillThere] = await db.select({ sha: storedFiles.sha256 }).from(storedFiles).where(eq(storedFiles.sha256, sha)).limit(1);
-      if (!stillThere) removeContent(written.path);
+      await db.transaction(async (tx) => {
+        const [stillThere] = await tx.select({ sha: storedFiles.sha256 }).from(storedFiles).where(eq(storedFiles.sha256, sha)).limit(1);
+        if (!stillThere) removeContent(written.path);
+      });
     }
     throw err;
   }

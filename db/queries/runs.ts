@@ -1,7 +1,7 @@
 import "server-only";
 import { recomputeOven } from "./drift";
 import { refreshHealth } from "./health";
-import { and, asc, desc, eq, isNull, ne } from "drizzle-orm";
+import { and, asc, desc, eq, isNotNull, isNull, ne } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { ovens } from "../schema/fleet";
 import { storedFiles } from "../schema/files";
@@ -131,8 +131,17 @@ export async function deleteRun(db: Db, runId: number, actor: Actor) {
     const [file] = await tx.update(storedFiles).set({ purgedAt: new Date() }).where(eq(storedFiles.sha256, before.fileSha256)).returning();
     return file ?? null;
   });
-  if (purge) removeContent(purge.path);
-  return { id: runId, fileRemoved: purge !== null };
+  // The bytes go only while the row still says purged, inside a write transaction: an upload of
+  // the same file in between clears purgedAt (and checks the bytes are there) in its own.
+  let removed = false;
+  if (purge) {
+    removed = await db.transaction(async (tx) => {
+      const [still] = await tx.select({ sha: storedFiles.sha256 }).from(storedFiles).where(and(eq(storedFiles.sha256, purge.sha256), isNotNull(storedFiles.purgedAt))).limit(1);
+      if (still) removeContent(purge.path);
+      return Boolean(still);
+    });
+  }
+  return { id: runId, fileRemoved: removed };
 }
 
 export async function getRunFile(db: DbOrTx, runId: number) {

@@ -25,12 +25,41 @@ export function writeContent(bytes: Uint8Array, sha = sha256Hex(bytes)): { sha25
   const rel = relativePathFor(sha);
   const abs = path.join(uploadRoot(), rel);
   if (fs.existsSync(abs)) return { sha256: sha, path: rel, created: false };
-  fs.mkdirSync(path.dirname(abs), { recursive: true });
-  // Write to a temporary name first so a crash never leaves a half file under the hash.
-  const tmp = `${abs}.${process.pid}.${Date.now()}.tmp`;
-  fs.writeFileSync(tmp, bytes);
-  fs.renameSync(tmp, abs);
+  writeFileDurably(abs, bytes);
   return { sha256: sha, path: rel, created: true };
+}
+
+/**
+ * Writes a file so that its final name only ever holds the whole content: bytes go to a
+ * temporary name, are flushed to disk, then renamed, and the folder entry is flushed too. The
+ * database row that refers to the file is committed only after this returns, so neither a killed
+ * process nor a power cut leaves a row pointing at a missing or half-written file.
+ */
+export function writeFileDurably(abs: string, bytes: Uint8Array): void {
+  const dir = path.dirname(abs);
+  fs.mkdirSync(dir, { recursive: true });
+  const tmp = `${abs}.${crypto.randomUUID()}.tmp`;
+  const fd = fs.openSync(tmp, "w");
+  try {
+    fs.writeSync(fd, bytes);
+    fs.fsyncSync(fd);
+  } finally {
+    fs.closeSync(fd);
+  }
+  fs.renameSync(tmp, abs);
+  syncFolder(dir);
+}
+
+function syncFolder(dir: string) {
+  let fd: number | undefined;
+  try {
+    fd = fs.openSync(dir, "r");
+    fs.fsyncSync(fd);
+  } catch {
+    // Some platforms (Windows) cannot open a folder for syncing; the rename is then as durable as the OS makes it.
+  } finally {
+    if (fd !== undefined) fs.closeSync(fd);
+  }
 }
 
 export function readContent(rel: string): Buffer | null {

@@ -4,6 +4,7 @@ import path from "node:path";
 import { createHash } from "node:crypto";
 import { AppError } from "@/lib/errors";
 import { env } from "@/lib/env";
+import { writeFileDurably } from "@/lib/storage/file-store";
 import { MAX_UPLOAD_BYTES, sniffFileType } from "./file-type";
 
 // Photos and documents attached to work orders and changes: checked by their bytes (not their
@@ -22,8 +23,11 @@ export async function storeSniffedUpload(file: { name: string; bytes: Uint8Array
   const type = sniffFileType(file.bytes);
   if (!type) throw new AppError("unsupported_file", "file: only JPEG, PNG or WebP photos and PDF documents can be attached.", { fields: { file: "not a JPEG, PNG, WebP or PDF" } });
   const sha256 = createHash("sha256").update(file.bytes).digest("hex");
-  await fs.mkdir(path.resolve(env().UPLOAD_DIR), { recursive: true });
-  await fs.writeFile(uploadPath(sha256), file.bytes);
+  // Never rewrite a file that is already there: rows may refer to it, and a crash half-way
+  // through an overwrite would leave them pointing at a truncated copy.
+  const target = uploadPath(sha256);
+  const exists = await fs.access(target).then(() => true, () => false);
+  if (!exists) writeFileDurably(target, file.bytes);
   const fileName = file.name.replace(/[^\w.\- ]+/g, "_").slice(0, 120) || `upload.${type.ext}`;
   return { sha256, fileName, contentType: type.contentType, sizeBytes: file.bytes.byteLength };
 }
