@@ -72,7 +72,8 @@ const form = (field: string, bytes: Uint8Array, name: string, type: string, fiel
 };
 
 /** The upload routes: where the file goes, who may send it, and what each accepts. */
-const UPLOADS = () => [
+type Upload = { label: string; file: string; params: Record<string, string>; field: string; role: Role; fields: Record<string, string> };
+const UPLOADS = (): Upload[] => [
   { label: "work-order photo", file: "api/v1/work-orders/[workOrderId]/attachments/route.ts", params: { workOrderId: String(ids.workOrderId) }, field: "file", role: "technician" as Role, fields: {} },
   { label: "change photo", file: "api/v1/changes/[changeId]/attachments/route.ts", params: { changeId: String(ids.changeId) }, field: "file", role: "engineer" as Role, fields: {} },
   {
