@@ -12,7 +12,7 @@ import { passwordSignInSchema } from "@/lib/validation/user";
 import { env } from "./env";
 import { sendMail } from "./mail";
 import { MagicLinkEmail } from "@/emails/magic-link";
-import { countSignInAttempt, signInAllowed } from "./auth/sign-in-limit";
+import { countSignInAttempt, refundSignInAttempt } from "./auth/sign-in-limit";
 
 export class AccountLockedError extends CredentialsSignin {
   code = "locked";
@@ -49,14 +49,11 @@ export const { handlers, auth, signIn, signOut } = NextAuth(async () => {
         // here, so the per-address limit is checked here, before the password is.
         async authorize(raw, request) {
           const headers = request?.headers ?? new Headers();
-          if (!signInAllowed(headers).allowed) throw new SignInRateLimitedError();
+          if (!countSignInAttempt(headers).allowed) throw new SignInRateLimitedError();
           const parsed = passwordSignInSchema.safeParse(raw);
-          if (!parsed.success) {
-            countSignInAttempt(headers);
-            return null;
-          }
+          if (!parsed.success) return null;
           const result = await checkPassword(db, parsed.data.email, parsed.data.password);
-          if (result.kind !== "ok") countSignInAttempt(headers);
+          if (result.kind === "ok") refundSignInAttempt(headers);
           if (result.kind === "locked") throw new AccountLockedError();
           if (result.kind === "bad") {
             if (result.delayMs) await sleep(result.delayMs);

@@ -34,6 +34,8 @@ export function take(bucket: Bucket | undefined, limit: Limit, now: number): { b
   return { bucket: b, decision: { allowed: false, remaining: 0, retryAfterMs: waitMs(b.tokens, limit) } };
 }
 
+const peekTokens = (b: Bucket, limit: Limit, now: number) => refilled(b, limit, now).tokens;
+
 /** Whether a request would be allowed now, without spending anything. */
 export function peek(bucket: Bucket | undefined, limit: Limit, now: number): Decision {
   const b = refilled(bucket, limit, now);
@@ -54,6 +56,12 @@ export class RateLimiter {
     this.buckets.set(key, bucket);
     if (this.buckets.size > this.maxKeys) this.buckets.delete(this.buckets.keys().next().value!);
     return decision;
+  }
+
+  /** Gives back a token taken for an attempt that turned out not to count (never above capacity). */
+  refund(key: string, now = Date.now()): void {
+    const b = this.buckets.get(key);
+    if (b) this.buckets.set(key, { tokens: Math.min(this.limit.capacity, peekTokens(b, this.limit, now) + 1), at: now });
   }
 
   peek(key: string, now = Date.now()): Decision {

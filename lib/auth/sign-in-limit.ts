@@ -4,7 +4,7 @@ import { sharedLimiter, waitPhrase, type Decision, type Limit } from "@/lib/rate
 /*
  * Sign-in attempts per client address: failed password sign-ins and every magic-link request
  * (known address or not, so the limit reveals nothing about who has an account) share one
- * bucket of SIGN_IN_RATE_LIMIT per 15 minutes. Successful password sign-ins cost nothing, so a
+ * bucket of SIGN_IN_RATE_LIMIT per 15 minutes. Successful password sign-ins give their attempt back, so a
  * plant where everyone signs in through one address at shift change is not slowed.
  * The per-account lockout (lockout.ts) is the other half: it stops guessing one account's
  * password from many addresses. Buckets are per app instance (see lib/rate-limit.ts).
@@ -46,9 +46,17 @@ export function signInAllowed(headers: Headers, now = Date.now()): Decision {
   return limiter()?.peek(clientAddress(headers), now) ?? OPEN;
 }
 
-/** Counts one attempt (a failed password, a magic-link request). */
+/** Counts one attempt (a password sign-in, a magic-link request); refused when none are left. */
 export function countSignInAttempt(headers: Headers, now = Date.now()): Decision {
   return limiter()?.take(clientAddress(headers), now) ?? OPEN;
+}
+
+/**
+ * A password sign-in that succeeded gives its attempt back. Taking first and refunding on success
+ * (rather than counting failures afterwards) keeps the limit exact when many attempts run at once.
+ */
+export function refundSignInAttempt(headers: Headers, now = Date.now()): void {
+  limiter()?.refund(clientAddress(headers), now);
 }
 
 export function signInLimitedMessage(retryAfterMs: number): string {

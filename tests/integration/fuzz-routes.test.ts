@@ -39,6 +39,7 @@ const tokens = {} as Record<Role, string>;
 let vocab: Awaited<ReturnType<typeof schemaVocabulary>>;
 const prototypeBefore = Object.getOwnPropertyNames(Object.prototype).sort();
 const statuses: Record<string, number> = {};
+const seeds = new Map<string, { handler: Handler; seed: Awaited<ReturnType<typeof seedFor>> }>();
 
 beforeAll(async () => {
   t = await createTestDb();
@@ -49,6 +50,13 @@ beforeAll(async () => {
     tokens[role] = (await createApiToken(t.db, { userId: u!.id, name: `fuzz-${role}` }, null)).secret;
   }
   vocab = await schemaVocabulary();
+  // Every seed is made before any fuzzing: a fuzzed edit may rename the oven they look up.
+  for (const { file, method } of routes) {
+    if (NOT_FUZZED[file]) continue;
+    const handler = ((await import(path.join(ROOT, file))) as Record<string, Handler>)[method];
+    const who = allowedRoles(handler.permission).find((r) => r !== "admin") ?? "admin";
+    seeds.set(`${method} ${file}`, { handler, seed: await seedFor(file, method, await matrixCtx(t.db, who, inProcessGet(tokens.viewer))) });
+  }
 });
 afterAll(() => {
   t?.close();
@@ -65,10 +73,8 @@ describe("fuzzed write routes answer 2xx or 4xx, never 500", () => {
   for (const { file, method } of routes) {
     if (NOT_FUZZED[file]) continue;
     it(`${method} ${urlPathOf(file)}`, async () => {
-      const handler = ((await import(path.join(ROOT, file))) as Record<string, Handler>)[method];
+      const { handler, seed } = seeds.get(`${method} ${file}`)!;
       const segments = dynamicSegments(file);
-      const who = allowedRoles(handler.permission).find((r) => r !== "admin") ?? "admin";
-      const seed = await seedFor(file, method, await matrixCtx(t.db, who, inProcessGet(tokens.viewer)));
       const randomQuery = fc.array(fc.tuple(fc.oneof(fc.constantFrom(...vocab.keys, "token"), fc.string({ maxLength: 10 })), hostileString), { maxLength: 4 }).map((q) => new URLSearchParams(q).toString());
       const random = fc.record({ ids: fc.array(hostileId, { minLength: segments.length, maxLength: segments.length }), query: randomQuery, body: randomBody(vocab) });
       const mutated = seed

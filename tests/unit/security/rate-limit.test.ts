@@ -52,6 +52,18 @@ describe("RateLimiter", () => {
     expect(l.peek("a", T0).allowed).toBe(false);
   });
 
+  it("refund gives one token back, never above capacity (a sign-in that succeeded)", () => {
+    const l = new RateLimiter({ capacity: 2, windowMs: 60_000 });
+    l.take("a", T0);
+    l.take("a", T0);
+    expect(l.peek("a", T0).allowed).toBe(false);
+    l.refund("a", T0);
+    expect(l.peek("a", T0)).toMatchObject({ allowed: true, remaining: 1 });
+    l.refund("a", T0);
+    l.refund("a", T0);
+    expect(l.peek("a", T0).remaining).toBe(2);
+  });
+
   it("forgets the least recently used key beyond maxKeys (memory stays bounded)", () => {
     const l = new RateLimiter({ capacity: 1, windowMs: 60_000 }, 3);
     for (const k of ["a", "b", "c"]) l.take(k, T0);
