@@ -6,6 +6,8 @@ export const E2E = {
   baseURL: `http://localhost:${PORT}`,
   databaseUrl: "file:./data/e2e.db",
   smtpPort: Number(process.env.E2E_SMTP_PORT ?? 2626),
+  /** Failed sign-ins per client address per 15 minutes (the app's default, stated for the security spec). */
+  signInRateLimit: 30,
 };
 
 /** The shared secret the e2e server's POST /api/cron/tick accepts. */
@@ -47,6 +49,7 @@ export default defineConfig({
       DEMO_MODE: "on",
       AUTH_SECRET: "e2e-secret-for-tests-only-0123456789",
       CRON_SECRET: CRON_SECRET_FOR_E2E,
+      SIGN_IN_RATE_LIMIT: String(E2E.signInRateLimit),
       AUTH_URL: E2E.baseURL,
       NODE_ENV: "production",
     },

@@ -30,7 +30,9 @@ export function formDataToObject(input: FormData | Record<string, unknown>): Rec
   const out: Record<string, unknown> = {};
   for (const [key, value] of input.entries()) {
     if (key.startsWith("$ACTION")) continue;
-    out[key] = value;
+    // Defined, not assigned: a field named "__proto__" must stay a field, not become the
+    // object's prototype (a File there made every later read throw).
+    Object.defineProperty(out, key, { value, enumerable: true, writable: true, configurable: true });
   }
   return out;
 }

@@ -7,12 +7,33 @@ import type { Actor } from "./actor";
 import { AppError, forbidden, invalidInput, unauthorized } from "./errors";
 import { can, type Permission } from "./permissions";
 import { getRequestActor } from "./session";
+import { env } from "./env";
+import { retryAfterSeconds, sharedLimiter, waitPhrase } from "./rate-limit";
 
 export type ApiContext<P> = { req: Request; actor: Actor; db: Db; params: P };
 type RouteCtx = { params: Promise<Record<string, string | string[]>> };
 
 export function errorResponse(err: AppError) {
-  return NextResponse.json({ error: { code: err.code, message: err.message, details: err.details ?? null } }, { status: err.status });
+  const retryAfter = err.details?.retryAfterSeconds;
+  const headers = typeof retryAfter === "number" ? { "retry-after": String(retryAfter) } : undefined;
+  return NextResponse.json({ error: { code: err.code, message: err.message, details: err.details ?? null } }, { status: err.status, headers });
+}
+
+/**
+ * Each API token may make API_RATE_LIMIT_PER_MINUTE requests a minute (a bucket of that size,
+ * refilled evenly), so one runaway script cannot starve the plant's other users. Per app
+ * instance (lib/rate-limit.ts says why). Sessions are people clicking, and are not limited here.
+ */
+function checkTokenRate(actor: Actor, now = Date.now()) {
+  const perMinute = env().API_RATE_LIMIT_PER_MINUTE;
+  if (actor.kind !== "token" || actor.tokenId === null || perMinute === 0) return;
+  const d = sharedLimiter("api-token", { capacity: perMinute, windowMs: 60_000 }).take(String(actor.tokenId), now);
+  if (d.allowed) return;
+  const seconds = retryAfterSeconds(d.retryAfterMs);
+  throw new AppError("rate_limited", `This API token has made more than ${perMinute} requests in a minute. Wait ${waitPhrase(d.retryAfterMs)} (Retry-After) and slow down, or ask an admin to raise API_RATE_LIMIT_PER_MINUTE.`, {
+    retryAfterSeconds: seconds,
+    limitPerMinute: perMinute,
+  });
 }
 
 function toResponse(err: unknown) {
@@ -39,6 +60,7 @@ export function withApi<P = Record<string, string>>(
     try {
       const actor = await getRequestActor(req.headers.get("authorization"));
       if (!actor) throw unauthorized();
+      checkTokenRate(actor);
       if (options.permission && !can(actor.role, options.permission)) throw forbidden(options.what ?? options.permission.replace(".", " "));
       const params = ((await ctx?.params) ?? {}) as P;
       const result = await handler({ req, actor, db: await getDb(), params });
@@ -72,9 +94,10 @@ export function parseQuery<S extends z.ZodType>(req: Request, schema: S): z.infe
   return parsed.data;
 }
 
+/** Ids in paths are plain decimals: Number() alone would also take "0x10", " 7" or "1e1". */
 export function parseId(raw: string | undefined, what: string): number {
-  const id = Number(raw);
-  if (!Number.isInteger(id) || id <= 0) throw new AppError("not_found", `${what} was not found.`);
+  const id = /^[1-9]\d{0,15}$/.test(raw ?? "") ? Number(raw) : NaN;
+  if (!Number.isSafeInteger(id)) throw new AppError("not_found", `${what} was not found.`);
   return id;
 }
 

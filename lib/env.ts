@@ -19,6 +19,12 @@ const envSchema = z.object({
   DEMO_MODE: z.enum(["on", "off"]).default("off"),
   DEMO_PASSWORD: z.string().min(8).default("ovenward-demo"),
   UPLOAD_DIR: z.string().default("./data/uploads"),
+  /** Requests per minute one API token may make (a token bucket of that size); 0 turns the limit off. */
+  API_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(0).default(600),
+  /** Failed password sign-ins plus magic-link requests per client address per 15 minutes; 0 turns it off. */
+  SIGN_IN_RATE_LIMIT: z.coerce.number().int().min(0).default(30),
+  /** Reverse proxies in front of the app that append to X-Forwarded-For; the client address is that many entries from the right. */
+  TRUSTED_PROXY_HOPS: z.coerce.number().int().min(1).max(10).default(1),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -52,7 +52,11 @@ export const planUpdateSchema = z.object({
 });
 export type PlanUpdateInput = z.infer<typeof planUpdateSchema>;
 
-export const generateSchema = z.object({ until: isoInstant.optional() });
+/** Plans look ahead at most 366 days; a farther horizon would only write years of orders nobody works. */
+export const GENERATE_MAX_AHEAD_MS = 366 * 86_400_000;
+export const generateSchema = z.object({
+  until: isoInstant.refine((d) => d.getTime() <= Date.now() + GENERATE_MAX_AHEAD_MS, "at most 366 days from now").optional(),
+});
 
 const boolish = z.preprocess((v) => (v === "true" || v === "1" ? true : v === "false" || v === "0" ? false : v), z.boolean());
 

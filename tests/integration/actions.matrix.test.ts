@@ -1,16 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ACTION_REGISTRY, runAction } from "@/lib/action";
-import "@/lib/actions/ovens";
-import "@/lib/actions/admin";
-import "@/lib/actions/changes";
-import "@/lib/actions/drift";
-import "@/lib/actions/mail";
-import "@/lib/actions/measurement";
 import { ROLES, type Role } from "@/db/schema/users";
 import { can } from "@/lib/permissions";
 import { ACTION_INPUTS } from "../matrix/actions";
 import { actorFor, createTestDb } from "./test-db";
 import { startMailSink } from "@/lib/mail-sink";
+import { loadAllActionDefinitions } from "../matrix/load-actions";
+
+// Every definition file in lib/actions/, so a new one cannot be left out of the matrix.
+await loadAllActionDefinitions();
 
 // The role × server-action matrix: every registered action, as every role, against a real database.
 let t: Awaited<ReturnType<typeof createTestDb>>;

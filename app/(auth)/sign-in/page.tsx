@@ -12,8 +12,14 @@ const ERRORS: Record<string, string> = {
   Configuration: "Sign-in is not configured correctly on this server. Tell your admin.",
 };
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string; error?: string }> }) {
-  const { next, error } = await searchParams;
+// A direct POST to the sign-in library's endpoints comes back here with ?error=…&code=….
+const CODES: Record<string, string> = {
+  rate_limited: "Too many sign-in attempts from your network. Wait a few minutes and try again, or ask an admin to help.",
+  locked: "Too many failed sign-ins for this account. It is locked for a while; try again later, or ask an admin to help.",
+};
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string; error?: string; code?: string }> }) {
+  const { next, error, code } = await searchParams;
   if (await getSessionActor()) redirect(next && next.startsWith("/") && !next.startsWith("//") ? next : "/fleet");
   const demo = env().DEMO_MODE === "on";
   return (
@@ -25,7 +31,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
         </div>
         {error ? (
           <p role="alert" className="rounded-lg border border-health-act/40 bg-red-50 px-3 py-2 text-sm text-health-act">
-            {ERRORS[error] ?? "Sign-in did not complete. Try again."}
+            {(code && CODES[code]) ?? ERRORS[error] ?? "Sign-in did not complete. Try again."}
           </p>
         ) : null}
         <PasswordForm next={next} />

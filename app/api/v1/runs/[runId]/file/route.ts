@@ -13,7 +13,9 @@ export const GET = withApi<{ runId: string }>(
     const safe = (row.run.fileName ?? `run-${runId}.csv`).replace(/[^\w.\- ]+/g, "_").slice(0, 120);
     return new Response(new Uint8Array(bytes), {
       headers: {
-        "content-type": row.file.mediaType.startsWith("text/") ? row.file.mediaType : "application/octet-stream",
+        // Logger files are only accepted when they decode as UTF-8 delimited text, so that is what
+        // they are served as; the type the uploader claimed (stored beside them) could say text/html.
+        "content-type": "text/csv; charset=utf-8",
         "content-disposition": `attachment; filename="${safe}"`,
         "x-content-type-options": "nosniff",
       },

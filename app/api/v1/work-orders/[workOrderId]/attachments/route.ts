@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
-import { parseId, withApi } from "@/lib/api";
+import { parseId, readFileUpload, withApi } from "@/lib/api";
 import { addAttachment } from "@/db/queries/work-order-extras";
-import { AppError } from "@/lib/errors";
+import { MAX_UPLOAD_BYTES } from "@/lib/uploads/file-type";
 
 type Params = { workOrderId: string };
 
@@ -9,10 +9,10 @@ type Params = { workOrderId: string };
 export const POST = withApi<Params>(
   async ({ req, db, actor, params }) => {
     const id = parseId(params.workOrderId, "That work order");
-    const form = await req.formData().catch(() => null);
-    const file = form?.get("file");
-    if (!file || typeof file === "string") throw new AppError("invalid_input", "file: is required (multipart form field \"file\").", { fields: { file: "is required" } });
-    const saved = await addAttachment(db, id, { name: file.name, bytes: new Uint8Array(await file.arrayBuffer()) }, actor);
+    // Through readFileUpload like the other uploads: a body declaring more than the limit is
+    // refused before it is read into memory.
+    const { file } = await readFileUpload(req, { maxBytes: MAX_UPLOAD_BYTES, label: "photo or document" });
+    const saved = await addAttachment(db, id, { name: file.name, bytes: file.bytes }, actor);
     return NextResponse.json(saved, { status: 201 });
   },
   { permission: "workorder.update", what: "attach files to work orders" },
