@@ -1,7 +1,7 @@
 import "server-only";
 import { recomputeOven } from "./drift";
 import { refreshHealth } from "./health";
-import { and, asc, desc, eq, isNull, ne } from "drizzle-orm";
+import { and, asc, desc, eq, isNull } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { ovens } from "../schema/fleet";
 import { storedFiles } from "../schema/files";
@@ -9,11 +9,12 @@ import { calibrations, instruments } from "../schema/instruments";
 import { runChannels, runJudgements, runSamples, runs, type RunChannelRow, type RunJudgementRow, type RunRow } from "../schema/runs";
 import { processWindows, testBoards } from "../schema/windows";
 import { recordAudit } from "./audit";
+import { contentStillReferenced } from "./stored-files";
 import { getWindow } from "./windows";
 import type { Actor } from "@/lib/actor";
 import { notFound } from "@/lib/errors";
 import { unpackSamples } from "@/lib/runs/samples-codec";
-import { removeContent } from "@/lib/storage/file-store";
+import { blobStore } from "@/lib/storage/blob-store";
 import { computeMetrics } from "@/lib/thermal/metrics";
 import { judge } from "@/lib/thermal/verdict";
 import { DEFAULT_WINDOW } from "@/lib/thermal/windows";
@@ -126,12 +127,11 @@ export async function deleteRun(db: Db, runId: number, actor: Actor) {
     await recomputeOven(tx, before.ovenId);
     await refreshHealth(tx, before.ovenId, new Date());
     if (!before.fileSha256) return null;
-    const [other] = await tx.select({ id: runs.id }).from(runs).where(and(eq(runs.fileSha256, before.fileSha256), isNull(runs.deletedAt), ne(runs.id, runId))).limit(1);
-    if (other) return null;
+    if (await contentStillReferenced(tx, before.fileSha256, runId)) return null;
     const [file] = await tx.update(storedFiles).set({ purgedAt: new Date() }).where(eq(storedFiles.sha256, before.fileSha256)).returning();
     return file ?? null;
   });
-  if (purge) removeContent(purge.path);
+  if (purge) await blobStore().delete(purge.sha256);
   return { id: runId, fileRemoved: purge !== null };
 }
 
