@@ -68,6 +68,17 @@ type TickAnswer = { status: number; from: string; body: { enqueued?: number; sen
 /** Rounds of simultaneous ticks on both instances: the lease lets one run at a time, nothing is done twice. */
 export async function checkCron({ db, a, b, check, secret }: Ctx & { secret: string }) {
   const count = async (q: Promise<{ n: number }[]>) => Number((await q)[0].n);
+  // A weekly plan started three weeks ago, made through A, gives the ticks work orders to generate.
+  const manager = await getUserByEmail(db, "manager@brightwater.example");
+  const managerToken = (await createApiToken(db, { userId: manager!.id, name: "deploy-test-plans" }, null)).secret;
+  const ovenIds = (await db.select({ id: ovens.id }).from(ovens).limit(2)).map((o) => o.id);
+  const dtstart = new Date(Date.now() - 21 * 86_400_000).toISOString().slice(0, 16);
+  const plan = await fetch(`${a.url}/api/v1/plans`, {
+    method: "POST",
+    headers: { authorization: `Bearer ${managerToken}`, "content-type": "application/json" },
+    body: JSON.stringify({ ovenIds, title: "Deployment check: weekly belt inspection", rrule: "FREQ=WEEKLY", dtstart, lookAheadDays: 14 }),
+  });
+  check("a manager creates a weekly plan on two ovens through A (POST /api/v1/plans)", plan.status === 201, `HTTP ${plan.status}`);
   const ordersBefore = await count(db.select({ n: sql<number>`count(*)` }).from(workOrders));
   const sentBefore = await count(db.select({ n: sql<number>`count(*)` }).from(outbox).where(eq(outbox.state, "sent")));
   const sinkBefore = await count(db.select({ n: sql<number>`count(*)` }).from(sinkMessages));
@@ -91,7 +102,7 @@ export async function checkCron({ db, a, b, check, secret }: Ctx & { secret: str
   check("ticks sent while another held the lease were skipped (lease_held)", skipped >= 1, `${skipped} of ${answers.length} skipped`);
   const generated = answers.reduce((s, x) => s + (x.body.generated ?? 0), 0);
   const ordersAfter = await count(db.select({ n: sql<number>`count(*)` }).from(workOrders));
-  check("work orders created equal the sum the ticks reported", ordersAfter - ordersBefore === generated, `${ordersAfter - ordersBefore} created, ${generated} reported`);
+  check("the ticks generated the plan's orders, each once: orders created = the sum the ticks reported > 0", generated > 0 && ordersAfter - ordersBefore === generated, `${ordersAfter - ordersBefore} created, ${generated} reported`);
   const sent = answers.reduce((s, x) => s + (x.body.sent ?? 0), 0);
   const sentRows = (await count(db.select({ n: sql<number>`count(*)` }).from(outbox).where(eq(outbox.state, "sent")))) - sentBefore;
   const mail = (await db.select({ headers: sinkMessages.headers }).from(sinkMessages)).slice(sinkBefore);
