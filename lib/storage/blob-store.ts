@@ -33,12 +33,13 @@ export function createBlobStore(e: Pick<Env, "STORAGE" | "UPLOAD_DIR" | "S3_BUCK
   });
 }
 
-const g = globalThis as unknown as { __ovenwardBlobStore?: BlobStore };
+let cached: { from: Env; store: BlobStore } | undefined;
 
-/** The store the configuration names, one per process. */
+/** The store the configuration names; made again only if the settings were read afresh. */
 export function blobStore(): BlobStore {
-  g.__ovenwardBlobStore ??= createBlobStore(env());
-  return g.__ovenwardBlobStore;
+  const e = env();
+  if (cached?.from !== e) cached = { from: e, store: createBlobStore(e) };
+  return cached.store;
 }
 
 /** Hashes and stores the bytes; `path` is the key inside the store (kept on stored_file rows). */
