@@ -97,7 +97,8 @@ export async function createRun(db: Db, ovenId: number, input: RunUploadInput, f
     // Only remove bytes this upload wrote and that no row refers to.
     if (written.created) {
       const [stillThere] = await db.select({ sha: storedFiles.sha256 }).from(storedFiles).where(eq(storedFiles.sha256, sha)).limit(1);
-      if (!stillThere) await blobStore().delete(sha);
+      // A store that fails here must not hide the error that brought us here; the bytes stay as an orphan.
+      if (!stillThere) await blobStore().delete(sha).catch((e) => console.error(`[runs] could not remove ${sha} after a failed upload`, e));
     }
     throw err;
   }

@@ -131,7 +131,8 @@ export async function deleteRun(db: Db, runId: number, actor: Actor) {
     const [file] = await tx.update(storedFiles).set({ purgedAt: new Date() }).where(eq(storedFiles.sha256, before.fileSha256)).returning();
     return file ?? null;
   });
-  if (purge) await blobStore().delete(purge.sha256);
+  // The run is deleted (committed) either way; bytes a failed removal leaves behind are unreferenced.
+  if (purge) await blobStore().delete(purge.sha256).catch((e) => console.error(`[runs] could not remove the file ${purge.sha256}`, e));
   return { id: runId, fileRemoved: purge !== null };
 }
 
