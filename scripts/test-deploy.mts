@@ -35,6 +35,7 @@ async function cleanup() {
   closeDb?.();
   await s3?.close().catch(() => undefined);
   if (!failed.length) fs.rmSync(dir, { recursive: true, force: true });
+  else console.log(`\nLogs and data kept in ${dir}`);
 }
 
 try {
