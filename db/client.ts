@@ -121,9 +121,15 @@ export async function openDatabase(url: string, authToken?: string): Promise<{ d
   if (isFile) {
     await client.execute("PRAGMA journal_mode=WAL");
     await client.execute("PRAGMA synchronous=NORMAL");
+    await client.execute("PRAGMA busy_timeout=10000");
+    await client.execute("PRAGMA foreign_keys=ON");
+  } else {
+    // A libSQL server refuses connection pragmas (busy_timeout is "unsupported"), and over HTTP each
+    // request is its own stream, so a pragma set here would not hold for the next statement anyway.
+    // The server enforces foreign keys itself (sqld's default); refuse one that does not.
+    const fk = await client.execute("PRAGMA foreign_keys");
+    if (Number(fk.rows[0]?.[0]) !== 1) throw new Error(`The libSQL server at ${url} does not enforce foreign keys; Ovenward relies on them.`);
   }
-  await client.execute("PRAGMA busy_timeout=10000");
-  await client.execute("PRAGMA foreign_keys=ON");
   const shared = isFile ? queueOnOneConnection(client, 30_000) : client;
   return { db: drizzle(shared, { schema }), client };
 }

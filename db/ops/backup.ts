@@ -3,7 +3,7 @@ import fs from "node:fs";
 import path from "node:path";
 import { createClient, type Client } from "@libsql/client";
 import { tableCounts } from "./table-digest";
-import { uploadReferences } from "./upload-references";
+import { referencePresent, uploadReferences } from "./upload-references";
 
 /*
  * An online backup of the embedded database while the app runs. `VACUUM INTO` reads the database
@@ -130,7 +130,7 @@ export async function backupDatabase({ url, out, uploadDir }: { url: string; out
   const inspected = await inspectDatabase(target);
   const uploadsFolder = `${target}.uploads`;
   const copied = copyUploads(path.resolve(uploadDir), uploadsFolder);
-  const missing = inspected.references.filter((r) => !fs.existsSync(path.join(uploadsFolder, r.path))).map((r) => `${r.owner}: ${r.path}`);
+  const missing = inspected.references.filter((r) => !referencePresent(uploadsFolder, r)).map((r) => `${r.owner}: ${r.path}`);
   const manifest: BackupManifest = {
     createdAt: new Date().toISOString(),
     source,

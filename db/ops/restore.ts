@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import { copyUploads, databaseFile, inspectDatabase, OpsError, sha256File, syncPath, type BackupManifest } from "./backup";
+import { referencePresent } from "./upload-references";
 
 /*
  * Puts a backup in place of the database. The app must be stopped: a running app keeps the old
@@ -100,6 +101,6 @@ export async function restoreDatabase({ url, from, uploadDir, force = false, now
   syncPath(path.dirname(target));
 
   const uploads = copyUploads(`${backup}.uploads`, path.resolve(uploadDir));
-  const missing = inspected.references.filter((r) => !fs.existsSync(path.join(path.resolve(uploadDir), r.path))).map((r) => `${r.owner}: ${r.path}`);
+  const missing = inspected.references.filter((r) => !referencePresent(path.resolve(uploadDir), r)).map((r) => `${r.owner}: ${r.path}`);
   return { target, keptAside, migrations: inspected.migrations, tables: inspected.tables, uploads: { ...uploads, folder: path.resolve(uploadDir), missing } };
 }

@@ -7,7 +7,8 @@ import { recordAudit } from "./audit";
 import type { Actor } from "@/lib/actor";
 import { AppError, fromDbError, notFound } from "@/lib/errors";
 import { CALIBRATION_DUE_SOON_DAYS, type CalibrationInput, type InstrumentInput } from "@/lib/validation/instruments";
-import { MAX_CERTIFICATE_BYTES, sha256Hex, sniffCertificate, writeContent } from "@/lib/storage/file-store";
+import { storeContent } from "@/lib/storage/blob-store";
+import { MAX_CERTIFICATE_BYTES, sniffCertificate } from "@/lib/uploads/file-type";
 
 const DAY = 86_400_000;
 const serialTaken = (serial: string) => () => `Another instrument of this kind already has the serial ${serial}.`;
@@ -97,9 +98,8 @@ export async function createCalibration(
     if (certificate.bytes.length > MAX_CERTIFICATE_BYTES) throw new AppError("file_too_large", "The certificate is larger than 10 MB.", { fields: { certificate: "at most 10 MB" } });
     const mediaType = sniffCertificate(certificate.bytes);
     if (!mediaType) throw new AppError("unsupported_file", "The certificate must be a PDF, PNG or JPEG file.", { fields: { certificate: "a PDF, PNG or JPEG file" } });
-    const sha = sha256Hex(certificate.bytes);
-    const written = writeContent(certificate.bytes, sha);
-    cert = { sha256: sha, path: written.path, mediaType, size: certificate.bytes.length };
+    const written = await storeContent(certificate.bytes);
+    cert = { sha256: written.sha256, path: written.path, mediaType, size: certificate.bytes.length };
   }
   const dueAt = input.dueAt ?? new Date(input.performedAt.getTime() + 365 * DAY);
   return db.transaction(async (tx) => {

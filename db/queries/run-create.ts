@@ -10,7 +10,7 @@ import { rememberMapping } from "./instruments";
 import { prepareRun, type PreparedRun } from "./run-prepare";
 import type { Actor } from "@/lib/actor";
 import { packSamples } from "@/lib/runs/samples-codec";
-import { removeContent, sha256Hex, writeContent } from "@/lib/storage/file-store";
+import { blobStore, storeContent } from "@/lib/storage/blob-store";
 import type { AnalysisResult } from "@/lib/thermal/types";
 import type { MetricSeries } from "@/lib/thermal/metrics";
 import type { RunUploadInput } from "@/lib/validation/runs";
@@ -62,8 +62,8 @@ export type CreatedRun = { id: number; prepared: PreparedRun; fileSha256: string
  */
 export async function createRun(db: Db, ovenId: number, input: RunUploadInput, file: { bytes: Uint8Array; name: string; mediaType: string }, actor: Actor): Promise<CreatedRun> {
   const prepared = await prepareRun(db, ovenId, input, file.bytes);
-  const sha = sha256Hex(file.bytes);
-  const written = writeContent(file.bytes, sha);
+  const written = await storeContent(file.bytes);
+  const sha = written.sha256;
   try {
     const id = await db.transaction(async (tx) => {
       await tx
@@ -72,7 +72,7 @@ export async function createRun(db: Db, ovenId: number, input: RunUploadInput, f
         .onConflictDoUpdate({ target: storedFiles.sha256, set: { purgedAt: null } });
       // A run deleted meanwhile may have removed these bytes (they existed when written above);
       // under this transaction's write lock they are put back before the row is committed.
-      writeContent(file.bytes, sha);
+      await blobStore().put(sha, file.bytes);
       const runId = await insertRun(
         tx,
         {
@@ -102,7 +102,8 @@ export async function createRun(db: Db, ovenId: number, input: RunUploadInput, f
     if (written.created) {
       await db.transaction(async (tx) => {
         const [stillThere] = await tx.select({ sha: storedFiles.sha256 }).from(storedFiles).where(eq(storedFiles.sha256, sha)).limit(1);
-        if (!stillThere) removeContent(written.path);
+        // A store that fails here must not hide the error that brought us here; the bytes stay as an orphan.
+        if (!stillThere) await blobStore().delete(sha).catch((e) => console.error(`[runs] could not remove ${sha} after a failed upload`, e));
       });
     }
     throw err;

@@ -1,7 +1,7 @@
 import "server-only";
 import { recomputeOven } from "./drift";
 import { refreshHealth } from "./health";
-import { and, asc, desc, eq, isNotNull, isNull, ne } from "drizzle-orm";
+import { and, asc, desc, eq, isNotNull, isNull } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { ovens } from "../schema/fleet";
 import { storedFiles } from "../schema/files";
@@ -9,11 +9,12 @@ import { calibrations, instruments } from "../schema/instruments";
 import { runChannels, runJudgements, runSamples, runs, type RunChannelRow, type RunJudgementRow, type RunRow } from "../schema/runs";
 import { processWindows, testBoards } from "../schema/windows";
 import { recordAudit } from "./audit";
+import { contentStillReferenced } from "./stored-files";
 import { getWindow } from "./windows";
 import type { Actor } from "@/lib/actor";
 import { notFound } from "@/lib/errors";
 import { unpackSamples } from "@/lib/runs/samples-codec";
-import { removeContent } from "@/lib/storage/file-store";
+import { blobStore } from "@/lib/storage/blob-store";
 import { computeMetrics } from "@/lib/thermal/metrics";
 import { judge } from "@/lib/thermal/verdict";
 import { DEFAULT_WINDOW } from "@/lib/thermal/windows";
@@ -126,18 +127,18 @@ export async function deleteRun(db: Db, runId: number, actor: Actor) {
     await recomputeOven(tx, before.ovenId);
     await refreshHealth(tx, before.ovenId, new Date());
     if (!before.fileSha256) return null;
-    const [other] = await tx.select({ id: runs.id }).from(runs).where(and(eq(runs.fileSha256, before.fileSha256), isNull(runs.deletedAt), ne(runs.id, runId))).limit(1);
-    if (other) return null;
+    if (await contentStillReferenced(tx, before.fileSha256, runId)) return null;
     const [file] = await tx.update(storedFiles).set({ purgedAt: new Date() }).where(eq(storedFiles.sha256, before.fileSha256)).returning();
     return file ?? null;
   });
   // The bytes go only while the row still says purged, inside a write transaction: an upload of
-  // the same file in between clears purgedAt (and checks the bytes are there) in its own.
+  // the same file in between clears purgedAt (and puts the bytes back) in its own. The run is
+  // deleted (committed) either way; bytes a failed removal leaves behind are unreferenced.
   let removed = false;
   if (purge) {
     removed = await db.transaction(async (tx) => {
       const [still] = await tx.select({ sha: storedFiles.sha256 }).from(storedFiles).where(and(eq(storedFiles.sha256, purge.sha256), isNotNull(storedFiles.purgedAt))).limit(1);
-      if (still) removeContent(purge.path);
+      if (still) await blobStore().delete(purge.sha256).catch((e) => console.error(`[runs] could not remove the file ${purge.sha256}`, e));
       return Boolean(still);
     });
   }

@@ -16,8 +16,6 @@ async function assertOrder(db: DbOrTx, id: number) {
   if (!o) throw notFound("That work order");
 }
 
-export { uploadPath } from "@/lib/uploads/store";
-
 /** Stores the bytes under their SHA-256 (the same photo twice is stored once). */
 export async function addAttachment(db: Db, workOrderId: number, file: { name: string; bytes: Uint8Array }, actor: Actor) {
   await assertOrder(db, workOrderId);

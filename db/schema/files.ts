@@ -5,7 +5,7 @@ export const storedFiles = sqliteTable("stored_file", {
   sha256: text("sha256").primaryKey(),
   size: integer("size").notNull(),
   mediaType: text("media_type").notNull(),
-  /** Relative to UPLOAD_DIR. */
+  /** The key inside the file store (lib/storage/blob-store.ts): `<2 hex>/<sha256>`, the same in a folder or a bucket. */
   path: text("path").notNull(),
   /** Set when the bytes were removed because nothing refers to them any more. */
   purgedAt: integer("purged_at", { mode: "timestamp_ms" }),

@@ -12,7 +12,7 @@ import { judge } from "@/lib/thermal/verdict";
 import { findWindowPreset, type ProcessWindow } from "@/lib/thermal/windows";
 import { seededRandom } from "@/lib/thermal/synthetic-profile";
 import type { AnalysisResult } from "@/lib/thermal/types";
-import { writeContent, sha256Hex } from "@/lib/storage/file-store";
+import { storeContent } from "@/lib/storage/blob-store";
 import { DEMO_BOARDS, DEMO_CALIBRATIONS, DEMO_INSTRUMENTS, HISTORY_DAYS } from "./demo-story";
 import { OVEN_STORIES, modelFor, type OvenStory } from "./run-stories";
 import { simulateRun } from "./run-model";
@@ -60,8 +60,8 @@ async function seedReference(db: Db, start: number): Promise<Ids> {
       if (c.serial === "BW-LG-0630") {
         // The newest calibration comes with its certificate, so the download can be tried on the demo.
         const bytes = new TextEncoder().encode(certificatePdf(`Kestrel Metrology - certificate KM-${performedAt.toISOString().slice(0, 10)} - ${c.serial}`));
-        certificateSha256 = sha256Hex(bytes);
-        const written = writeContent(bytes, certificateSha256);
+        const written = await storeContent(bytes);
+        certificateSha256 = written.sha256;
         await tx.insert(storedFiles).values({ sha256: certificateSha256, size: bytes.length, mediaType: "application/pdf", path: written.path }).onConflictDoNothing();
       }
       await tx.insert(calibrations).values({
@@ -130,8 +130,8 @@ async function seedOvenRuns(db: Db, story: OvenStory, ovenId: number, ids: Ids, 
       let fileSha256: string | null = null;
       if (n === days.length - 1) {
         const bytes = new TextEncoder().encode(toCsv(sim.time, sim.channels));
-        fileSha256 = sha256Hex(bytes);
-        const written = writeContent(bytes, fileSha256);
+        const written = await storeContent(bytes);
+        fileSha256 = written.sha256;
         await tx.insert(storedFiles).values({ sha256: fileSha256, size: bytes.length, mediaType: "text/csv", path: written.path }).onConflictDoNothing();
       }
       await insertRun(

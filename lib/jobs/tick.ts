@@ -11,7 +11,12 @@ export const TICK_LEASE = "scheduler";
 /** Longer than any tick should take; a tick that dies holding it blocks others this long at most. */
 export const TICK_LEASE_TTL_MS = 5 * 60_000;
 
-export type TickResult = { enqueued: number; sent: number; failed: number; generated: number; skipped?: "lease_held" };
+export type TickResult = {
+  enqueued: number; sent: number; failed: number; generated: number;
+  skipped?: "lease_held";
+  /** When this tick held the lease (wall clock), so an operator can see ticks never overlap. */
+  startedAt?: Date; finishedAt?: Date;
+};
 
 /**
  * One scheduler tick: take the lease (only one instance ticks at a time), run the generation
@@ -21,6 +26,7 @@ export async function runTick({ db, now = new Date(), transport, from, holder = 
   if (!(await acquireLease(db, { name: TICK_LEASE, holder, now, ttlMs: TICK_LEASE_TTL_MS }))) {
     return { enqueued: 0, sent: 0, failed: 0, generated: 0, skipped: "lease_held" };
   }
+  const startedAt = new Date();
   try {
     let generated = 0;
     for (const step of TICK_STEPS) generated += await step.run({ db, now });
@@ -29,7 +35,7 @@ export async function runTick({ db, now = new Date(), transport, from, holder = 
     const started = Date.now();
     const renew = () => acquireLease(db, { name: TICK_LEASE, holder, now: new Date(now.getTime() + (Date.now() - started)), ttlMs: TICK_LEASE_TTL_MS });
     const { sent, failed } = await drainOutbox(db, { now, transport, from, keepGoing: renew });
-    return { enqueued, sent, failed, generated };
+    return { enqueued, sent, failed, generated, startedAt, finishedAt: new Date() };
   } finally {
     await releaseLease(db, { name: TICK_LEASE, holder });
   }

@@ -12,7 +12,7 @@ import { backupDatabase, databaseFile } from "@/db/ops/backup";
 import { restoreDatabase } from "@/db/ops/restore";
 import { tableDigests } from "@/db/ops/table-digest";
 import { uploadReferences } from "@/db/ops/upload-references";
-import { writeFileDurably } from "@/lib/storage/file-store";
+import { writeFileDurably } from "@/lib/storage/local-driver";
 import { actorFor, createTestDb } from "./test-db";
 
 // db:backup while a write transaction is open on the database, then db:restore into a new place:

@@ -13,6 +13,7 @@ import { runChannels, runJudgements, runSamples, runs } from "@/db/schema/runs";
 import { storedFiles } from "@/db/schema/files";
 import { calibrations } from "@/db/schema/instruments";
 import { testBoards } from "@/db/schema/windows";
+import { changeAttachments, changes } from "@/db/schema/changes";
 import { ovens } from "@/db/schema/fleet";
 import { analyzeLoggerFile } from "@/lib/thermal/analyze";
 import { ThermalFileError } from "@/lib/thermal/errors";
@@ -169,6 +170,15 @@ describe("deleting", () => {
     expect((await t.db.select().from(runs).where(eq(runs.id, a.id)))[0].deletedAt).not.toBeNull();
     expect((await deleteRun(t.db, b.id, engineer)).fileRemoved).toBe(true);
     expect(fs.existsSync(onDisk)).toBe(false);
+  });
+
+  it("keeps the bytes while anything else (here a change's attachment) refers to the same hash", async () => {
+    const text = fs.readFileSync(path.join(FIXTURES, "generic-8ch.csv"), "utf8") + "\n\n";
+    const run = await createRun(t.db, ovenId, { boardId, mapping: MAPPING }, { bytes: new TextEncoder().encode(text), name: "shared.csv", mediaType: "text/csv" }, technician);
+    const [change] = await t.db.select({ id: changes.id }).from(changes).limit(1);
+    await t.db.insert(changeAttachments).values({ changeId: change.id, sha256: run.fileSha256, fileName: "shared.csv", contentType: "text/csv", sizeBytes: text.length });
+    expect((await deleteRun(t.db, run.id, engineer)).fileRemoved).toBe(false);
+    expect(fs.existsSync(path.join(uploads, run.fileSha256.slice(0, 2), run.fileSha256))).toBe(true);
   });
 });
 

@@ -25,8 +25,8 @@ describe("weekly digest, Mondays 07:30 Europe/Dublin", () => {
     expect(await h.tick(at("2027-01-04T07:29:59.999Z"))).toMatchObject({ enqueued: 0, sent: 0 });
     expect(await h.received()).toHaveLength(0);
 
-    expect(await h.tick(at("2027-01-04T07:30:00Z"))).toEqual({ enqueued: 1, sent: 1, failed: 0, generated: 0 });
-    expect(await h.tick(at("2027-01-04T07:31:00Z"))).toEqual({ enqueued: 0, sent: 0, failed: 0, generated: 0 });
+    expect(await h.tick(at("2027-01-04T07:30:00Z"))).toEqual({ enqueued: 1, sent: 1, failed: 0, generated: 0, startedAt: expect.any(Date), finishedAt: expect.any(Date) });
+    expect(await h.tick(at("2027-01-04T07:31:00Z"))).toEqual({ enqueued: 0, sent: 0, failed: 0, generated: 0, startedAt: expect.any(Date), finishedAt: expect.any(Date) });
     expect(await h.tick(at("2027-01-10T23:00:00Z"))).toMatchObject({ enqueued: 0, sent: 0 });
     const got = await h.received();
     expect(got).toHaveLength(1);

@@ -1,6 +1,6 @@
-import fs from "node:fs/promises";
 import { parseId, withApi } from "@/lib/api";
-import { getAttachment, uploadPath } from "@/db/queries/work-order-extras";
+import { getAttachment } from "@/db/queries/work-order-extras";
+import { blobStore } from "@/lib/storage/blob-store";
 import { notFound } from "@/lib/errors";
 
 type Params = { attachmentId: string };
@@ -9,7 +9,7 @@ export const GET = withApi<Params>(
   async ({ db, params }) => {
     const row = await getAttachment(db, parseId(params.attachmentId, "That attachment"));
     if (!row) throw notFound("That attachment");
-    const bytes = await fs.readFile(uploadPath(row.sha256)).catch(() => null);
+    const bytes = await blobStore().get(row.sha256);
     if (!bytes) throw notFound("That attachment's file");
     return new Response(new Uint8Array(bytes), {
       headers: {

@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { parseId, readJson, readMultipart, withApi } from "@/lib/api";
 import { calibrationJson, createCalibration, listCalibrations } from "@/db/queries/instruments";
 import { invalidInput } from "@/lib/errors";
-import { MAX_CERTIFICATE_BYTES } from "@/lib/storage/file-store";
+import { MAX_CERTIFICATE_BYTES } from "@/lib/uploads/file-type";
 import { calibrationSchema } from "@/lib/validation/instruments";
 
 export const GET = withApi<{ instrumentId: string }>(
