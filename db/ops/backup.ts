@@ -104,7 +104,7 @@ export function copyUploads(from: string, to: string) {
   return result;
 }
 
-export async function backupDatabase({ url, out, uploadDir }: { url: string; out: string; uploadDir: string }): Promise<BackupManifest & { manifestFile: string }> {
+export async function backupDatabase({ url, out, uploadDir }: { url: string; out: string; uploadDir: string | null }): Promise<BackupManifest & { manifestFile: string }> {
   const source = databaseFile(url);
   if (!fs.existsSync(source)) throw new OpsError(`There is no database at ${source} to back up.`);
   const target = path.resolve(out);
@@ -129,8 +129,9 @@ export async function backupDatabase({ url, out, uploadDir }: { url: string; out
 
   const inspected = await inspectDatabase(target);
   const uploadsFolder = `${target}.uploads`;
-  const copied = copyUploads(path.resolve(uploadDir), uploadsFolder);
-  const missing = inspected.references.filter((r) => !referencePresent(uploadsFolder, r)).map((r) => `${r.owner}: ${r.path}`);
+  // With STORAGE=s3 (uploadDir null) the files stay in the bucket: its versioning or replication keeps them.
+  const copied = uploadDir ? copyUploads(path.resolve(uploadDir), uploadsFolder) : { files: 0, bytes: 0, copied: 0 };
+  const missing = uploadDir ? inspected.references.filter((r) => !referencePresent(uploadsFolder, r)).map((r) => `${r.owner}: ${r.path}`) : [];
   const manifest: BackupManifest = {
     createdAt: new Date().toISOString(),
     source,

@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import type { Client } from "@libsql/client";
+import { contentKey } from "../../lib/storage/content-hash";
 
 // Where the database refers to files under UPLOAD_DIR (STORAGE=local). Logger files and
 // certificates are `stored_file` rows (path relative to UPLOAD_DIR); photos and documents on work
@@ -17,7 +18,7 @@ export async function uploadReferences(client: Pick<Client, "execute">): Promise
     const rows = await client.execute(`select id, sha256 from ${table}`);
     for (const r of rows.rows) {
       const sha = String(r.sha256);
-      refs.push({ path: path.join(sha.slice(0, 2), sha), sha256: sha, owner: `${table} ${r.id}` });
+      refs.push({ path: contentKey(sha), sha256: sha, owner: `${table} ${r.id}` });
     }
   }
   return refs;

@@ -13,6 +13,7 @@ import { restoreDatabase } from "@/db/ops/restore";
 import { tableDigests } from "@/db/ops/table-digest";
 import { uploadReferences } from "@/db/ops/upload-references";
 import { writeFileDurably } from "@/lib/storage/local-driver";
+import { contentKey } from "@/lib/storage/content-hash";
 import { actorFor, createTestDb } from "./test-db";
 
 // db:backup while a write transaction is open on the database, then db:restore into a new place:
@@ -55,7 +56,7 @@ async function writeStep(uploadDir: string, step: number, midway?: () => Promise
   const [order] = await t.db.select().from(workOrders).where(eq(workOrders.state, "open")).orderBy(workOrders.id).limit(1);
   const bytes = Buffer.from(`%PDF-1.7\nbackup test step ${step} ${crypto.randomUUID()}\n`);
   const sha = sha256(bytes);
-  writeFileDurably(path.join(uploadDir, sha), bytes);
+  writeFileDurably(path.join(uploadDir, contentKey(sha)), bytes);
   await t.db.transaction(async (tx) => {
     const [att] = await tx.insert(workOrderAttachments).values({ workOrderId: order.id, sha256: sha, fileName: `step-${step}.pdf`, contentType: "application/pdf", sizeBytes: bytes.length, uploadedById: actor.userId }).returning();
     if (midway) await midway();
