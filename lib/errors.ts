@@ -9,6 +9,7 @@ export type ErrorCode =
   | "invalid_file"
   | "file_too_large"
   | "unsupported_file"
+  | "unavailable"
   | "internal";
 
 const STATUS: Record<ErrorCode, number> = {
@@ -21,6 +22,7 @@ const STATUS: Record<ErrorCode, number> = {
   invalid_file: 400,
   file_too_large: 413,
   unsupported_file: 415,
+  unavailable: 503,
   internal: 500,
 };
 

@@ -15,6 +15,9 @@ type Upload = { name: string; bytes: Uint8Array };
 
 /** Logs a change with its photos and documents; a refused file stops it before anything is written. */
 export async function createChange(db: Db, ovenId: number, input: ChangeCreateInput, actor: Actor, files: Upload[] = []): Promise<ChangeRow> {
+  // An unknown oven is refused before any file is stored, so a 404 leaves no bytes behind.
+  const [known] = await db.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId)).limit(1);
+  if (!known) throw notFound("That oven");
   const stored: Awaited<ReturnType<typeof storeSniffedUpload>>[] = [];
   for (const f of files) stored.push(await storeSniffedUpload(f));
   return db.transaction(async (tx) => {

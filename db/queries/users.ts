@@ -76,6 +76,17 @@ export async function inviteUser(db: Db, input: { email: string; name?: string; 
   return { user, secret };
 }
 
+/**
+ * Takes back an invitation whose e-mail could not be sent: the account (never used: no password)
+ * and its invite token go, and the audit log says why, so the admin can simply try again.
+ */
+export async function withdrawInvite(db: Db, userId: string, reason: string, actor: Actor) {
+  await db.transaction(async (tx) => {
+    const [gone] = await tx.delete(users).where(and(eq(users.id, userId), isNull(users.passwordHash))).returning();
+    if (gone) await recordAudit(tx, { actor, action: "user.invite_withdrawn", entity: "user", entityId: userId, before: publicUser(gone), after: { reason } });
+  });
+}
+
 export async function findInvite(db: DbOrTx, secret: string) {
   const [row] = await db
     .select({ token: userTokens, user: users })

@@ -1,6 +1,7 @@
 import { createElement } from "react";
 import { defineAction } from "@/lib/action";
-import { inviteUser, updateUserAccess } from "@/db/queries/users";
+import { inviteUser, updateUserAccess, withdrawInvite } from "@/db/queries/users";
+import { AppError } from "@/lib/errors";
 import { createApiToken, revokeApiToken } from "@/db/queries/api-tokens";
 import { createLine, createSite } from "@/db/queries/sites";
 import { inviteSchema, tokenCreateSchema, tokenRevokeSchema, userAccessSchema } from "@/lib/validation/user";
@@ -16,11 +17,18 @@ export const inviteUserDef = defineAction({
   run: async ({ db, actor, input }) => {
     const { user, secret } = await inviteUser(db, input, actor);
     const url = `${appUrl()}/invite/${secret}`;
-    await sendMail({
-      to: user.email,
-      subject: "You have an Ovenward account",
-      element: createElement(InvitationEmail, { url, invitedBy: actor.name ?? actor.email, role: user.role, plant: "your plant" }),
-    });
+    try {
+      await sendMail({
+        to: user.email,
+        subject: "You have an Ovenward account",
+        element: createElement(InvitationEmail, { url, invitedBy: actor.name ?? actor.email, role: user.role, plant: "your plant" }),
+      });
+    } catch (err) {
+      // An account nobody was told about would block a second try ("already has an account").
+      const reason = (err as Error).message.slice(0, 200);
+      await withdrawInvite(db, user.id, reason, actor);
+      throw new AppError("unavailable", `The invitation to ${user.email} could not be e-mailed (${reason}), so no account was made. Check the mail settings (SMTP_URL) and invite again.`);
+    }
     return { id: user.id, email: user.email };
   },
 });
