@@ -111,10 +111,32 @@ export async function readMultipart(req: Request, { maxBytes, label }: { maxByte
     throw new AppError("unsupported_file", `Send the ${label} as multipart/form-data (a form upload).`, { contentType: type || null });
   const declared = Number(req.headers.get("content-length") ?? "0");
   const limit = maxBytes + 256 * 1024; // room for the other form fields
-  if (declared > limit) throw new AppError("file_too_large", `The ${label} is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`, { maxBytes });
+  const tooLarge = () => new AppError("file_too_large", `The ${label} is larger than ${Math.round(maxBytes / 1024 / 1024)} MB.`, { maxBytes });
+  if (declared > limit) throw tooLarge();
+  // A body sent without a length (chunked) is counted as it arrives and cut off at the limit,
+  // rather than read whole into memory first.
+  let seen = 0;
+  const source =
+    req.headers.get("content-length") === null && req.body
+      ? new Request(req.url, {
+          method: req.method,
+          headers: req.headers,
+          body: req.body.pipeThrough(
+            new TransformStream<Uint8Array, Uint8Array>({
+              transform(chunk, out) {
+                seen += chunk.byteLength;
+                if (seen > limit) out.error(tooLarge());
+                else out.enqueue(chunk);
+              },
+            }),
+          ),
+          duplex: "half",
+        } as RequestInit)
+      : req;
   try {
-    return await req.formData();
+    return await source.formData();
   } catch {
+    if (seen > limit) throw tooLarge();
     throw new AppError("invalid_input", "The multipart body could not be read. Check that the upload finished.", { fields: { file: "unreadable upload" } });
   }
 }
