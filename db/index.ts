@@ -2,12 +2,12 @@ import "server-only";
 import { openDatabase, type Db } from "./client";
 import { env } from "@/lib/env";
 
-// One database per server process, opened lazily on first use.
-const g = globalThis as unknown as { __ovenwardDb?: Promise<Db> };
+// One database per server process, opened lazily on first use (and again only if DATABASE_URL
+// itself changes, as it does between a test's setup and its requests).
+const g = globalThis as unknown as { __ovenwardDb?: { url: string; db: Promise<Db> } };
 
 export function getDb(): Promise<Db> {
-  if (!g.__ovenwardDb) {
-    g.__ovenwardDb = openDatabase(env().DATABASE_URL, env().DATABASE_AUTH_TOKEN).then((r) => r.db);
-  }
-  return g.__ovenwardDb;
+  const { DATABASE_URL: url, DATABASE_AUTH_TOKEN: token } = env();
+  if (g.__ovenwardDb?.url !== url) g.__ovenwardDb = { url, db: openDatabase(url, token).then((r) => r.db) };
+  return g.__ovenwardDb.db;
 }

@@ -47,18 +47,22 @@ const envSchema = z.object({
 
 export type Env = z.infer<typeof envSchema>;
 
-let cached: Env | undefined;
+// Parsed again only when one of its variables changes (tests and scripts set them after some
+// module has already read the settings; a stale copy would point at another database).
+const KEYS = Object.keys(envSchema.shape) as (keyof Env)[];
+let cached: { key: string; env: Env } | undefined;
 
 export function env(): Env {
-  if (!cached) {
+  const key = KEYS.map((k) => process.env[k] ?? "\u0000").join("\u0001");
+  if (cached?.key !== key) {
     const parsed = envSchema.safeParse(process.env);
     if (!parsed.success) {
       const fields = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
       throw new Error(`Ovenward's configuration is invalid (${fields}). See .env.example.`);
     }
-    cached = parsed.data;
+    cached = { key, env: parsed.data };
   }
-  return cached;
+  return cached.env;
 }
 
 export function appUrl(): string {
