@@ -23,7 +23,8 @@ async function openWizard(page: Page) {
   await page.locator("main a", { hasText: "L1-RF1" }).first().click();
   await expect(page).toHaveURL(/\/ovens\/\d+\/health$/);
   await page.getByRole("navigation", { name: "Oven sections" }).getByRole("link", { name: "Runs" }).click();
-  await expect(page).toHaveURL(/\/ovens\/\d+\/runs$/);
+  // The address changes when the runs page has arrived; on a busy two-core machine that took over 10 s.
+  await expect(page).toHaveURL(/\/ovens\/\d+\/runs$/, { timeout: 30_000 });
   await page.getByRole("link", { name: "Record a run" }).click();
   await expect(page.getByRole("heading", { name: /Record a verification run on L1-RF1/ })).toBeVisible();
   await page.waitForLoadState("networkidle");
