@@ -9,6 +9,8 @@ import { runSummaries } from "./run-summary";
 
 const RANK: Record<HealthState, number> = { down: 0, act: 1, watch: 2, steady: 3 };
 const OPEN = ["open", "in_progress", "on_hold"] as const;
+/** localeCompare's order, with one collator: localeCompare made one per call (7 ms per 200 ovens). */
+const TAGS = new Intl.Collator();
 
 export type FleetOven = {
   id: number;
@@ -66,7 +68,8 @@ export async function fleetView(db: DbOrTx, filter: { siteId?: number; lineId?: 
         .groupBy(workOrders.ovenId)
     ).map((w) => [w.ovenId, w]),
   );
-  const since = now.getTime() - 30 * 86_400_000;
+  // ISO times of one format compare as strings.
+  const since = new Date(now.getTime() - 30 * 86_400_000).toISOString();
   const out: FleetOven[] = base.map((b) => {
     const summary = b.health?.runSummary ?? computed.get(b.oven.id)!;
     const last = summary.lastRun;
@@ -80,13 +83,13 @@ export async function fleetView(db: DbOrTx, filter: { siteId?: number; lineId?: 
       site: b.site,
       state: (b.health?.state as HealthState | undefined) ?? (b.oven.serviceState === "down" ? "down" : "steady"),
       reasons: b.health?.reasons ?? ["Health has not been worked out yet."],
-      lastRun: last ? { id: last.id, runAt: new Date(last.runAt).toISOString(), verdict: last.verdict, windowUse: last.windowUse } : null,
+      lastRun: last ? { id: last.id, runAt: last.runAt, verdict: last.verdict, windowUse: last.windowUse } : null,
       openAlerts: alertCounts.get(b.oven.id) ?? 0,
       openWorkOrders: Number(w?.open ?? 0),
       overdueWorkOrders: Number(w?.overdue ?? 0),
-      deltaT: summary.deltaT.filter(([at]) => at >= since).map(([at, value]) => ({ at: new Date(at).toISOString(), value })),
+      deltaT: summary.deltaT.filter((p) => p.at >= since),
       deltaTLimit: last ? last.deltaTMax : null,
     };
   });
-  return out.sort((x, y) => RANK[x.state] - RANK[y.state] || x.tag.localeCompare(y.tag));
+  return out.sort((x, y) => RANK[x.state] - RANK[y.state] || TAGS.compare(x.tag, y.tag));
 }

@@ -27,13 +27,13 @@ export async function runSummaries(db: DbOrTx, ovenIds: number[], now: Date): Pr
   const lastIds = latest.map((l) => l.runId).filter((id): id is number => id !== null);
   if (lastIds.length) {
     const rows = await db.select({ id: runs.id, ovenId: runs.ovenId, runAt: runs.runAt, verdict: runs.verdictStatus, windowUse: runs.windowUse, window: runs.windowValues }).from(runs).where(inArray(runs.id, lastIds));
-    for (const r of rows) out.get(r.ovenId)!.lastRun = { id: r.id, runAt: r.runAt.getTime(), verdict: r.verdict, windowUse: r.windowUse, deltaTMax: r.window.deltaTMax ?? null };
+    for (const r of rows) out.get(r.ovenId)!.lastRun = { id: r.id, runAt: r.runAt.toISOString(), verdict: r.verdict, windowUse: r.windowUse, deltaTMax: r.window.deltaTMax ?? null };
   }
   const spark = await db
     .select({ ovenId: runs.ovenId, at: runs.runAt, value: runs.deltaTPeak })
     .from(runs)
     .where(and(inArray(runs.ovenId, ovenIds), isNull(runs.deletedAt), gte(runs.runAt, new Date(now.getTime() - 30 * DAY))))
     .orderBy(asc(runs.ovenId), asc(runs.runAt), asc(runs.id));
-  for (const s of spark) out.get(s.ovenId)!.deltaT.push([s.at.getTime(), s.value]);
+  for (const s of spark) out.get(s.ovenId)!.deltaT.push({ at: s.at.toISOString(), value: s.value });
   return out;
 }

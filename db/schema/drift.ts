@@ -55,11 +55,15 @@ export const driftPoints = sqliteTable(
 
 export const HEALTH_STATES = ["steady", "watch", "act", "down"] as const;
 
-/** The fleet view's figures of an oven's runs, as of its last health refresh (times in ms). */
+/**
+ * The fleet view's figures of an oven's runs as of its last health refresh, kept in the shape
+ * the view answers with (ISO times), so reading it makes no dates: 6 000 of them per request on
+ * 200 ovens were a tenth of the view's time.
+ */
 export type OvenRunSummary = {
-  lastRun: { id: number; runAt: number; verdict: "pass" | "marginal" | "fail"; windowUse: number | null; deltaTMax: number | null } | null;
-  /** [run time, ΔT at peak] of the runs of the 30 days before the refresh, oldest first. */
-  deltaT: [number, number][];
+  lastRun: { id: number; runAt: string; verdict: "pass" | "marginal" | "fail"; windowUse: number | null; deltaTMax: number | null } | null;
+  /** ΔT at peak of the runs of the 30 days before the refresh, oldest first. */
+  deltaT: { at: string; value: number }[];
 };
 
 /** Each oven's current health, kept up to date as runs, orders and calibrations change. */
