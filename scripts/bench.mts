@@ -137,7 +137,7 @@ if (results.demo && results.large) {
   console.log(`Fleet view large/demo ratio: median ${ratio.toFixed(2)}, p95 ${ratio95.toFixed(2)} (target < 2) — ${ratio < 2 ? "met" : "NOT met"}`);
 }
 for (const { name, result: r } of loads) {
-  console.log(`\nMixed load on the ${name} data (${connections} connections, ${r.duration} s; 5 reads and 2 writes per round):`);
+  console.log(`\nMixed load on the ${name} data (${connections} connections, ${r.duration} s; 4 reads and 2 writes per round):`);
   console.table([
     {
       "requests": r.requests.total, "req/s (mean)": r.requests.average.toFixed(1), "latency p50 ms": r.latency.p50, "p90": r.latency.p90, "p99": r.latency.p99, "max": r.latency.max,
