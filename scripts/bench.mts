@@ -65,6 +65,7 @@ if (args.only !== "demo") sets.push({ name: "large", url: copyOf(largeSource, di
 type Measure = { key: string; label: string; target: string; p95Limit: number | null };
 const MEASURES: Measure[] = [
   { key: "fleet", label: "fleet view (every oven)", target: "p95 < 100 ms", p95Limit: 100 },
+  { key: "site", label: "fleet view, first site only", target: "—", p95Limit: null },
   { key: "trend", label: "an oven's ΔT trend, whole history", target: "p95 < 100 ms", p95Limit: 100 },
   { key: "runs", label: "runs list, first page of 25", target: "p95 < 100 ms", p95Limit: 100 },
   { key: "orders", label: "work-order list, first page of 50", target: "p95 < 100 ms", p95Limit: 100 },
@@ -76,7 +77,7 @@ const loads: { name: string; result: Awaited<ReturnType<typeof mixedLoad>> }[] =
 
 for (const set of sets) {
   const fx = await fixtures(set.url);
-  described.push(`${set.name}: ${fx.ovens} ovens, ${fx.runs} runs, ${fx.workOrders} work orders`);
+  described.push(`${set.name}: ${fx.ovens} ovens (${fx.siteOvens} on the first site), ${fx.runs} runs, ${fx.workOrders} work orders`);
   console.log(`Starting the app on the ${set.name} data (${fx.ovens} ovens, ${fx.runs} runs)…`);
   const server = await startServer({ databaseUrl: set.url, port, uploadDir: path.join(dir, `uploads-${set.name}`) });
   try {
@@ -84,6 +85,7 @@ for (const set of sets) {
     const get = (p: string) => () => ({ url: server.base + p, init: { headers: auth } });
     const r: Record<string, Timings> = {};
     r.fleet = await timeRequests(samples, 10, get("/api/v1/fleet"));
+    r.site = await timeRequests(samples, 10, get(`/api/v1/fleet?siteId=${fx.siteId}`));
     r.trend = await timeRequests(samples, 10, get(`/api/v1/ovens/${fx.trendOvenId}/trends?metric=deltaTPeak`));
     r.runs = await timeRequests(samples, 10, get("/api/v1/runs"));
     r.orders = await timeRequests(samples, 10, get("/api/v1/work-orders"));

@@ -5,7 +5,7 @@ import { openDatabase } from "@/db/client";
 import { migrateDatabase } from "@/db/migrate";
 import { seedDemo } from "@/db/seed/seed-demo";
 import { createApiToken } from "@/db/queries/api-tokens";
-import { ovens } from "@/db/schema/fleet";
+import { lines, ovens } from "@/db/schema/fleet";
 import { runs } from "@/db/schema/runs";
 import { users } from "@/db/schema/users";
 import { workOrders } from "@/db/schema/maintenance";
@@ -29,7 +29,7 @@ export function copyOf(sourceUrl: string, dir: string): string {
   return `file:${target}`;
 }
 
-export type Fixtures = { token: string; trendOvenId: number; uploadOvenId: number; instrumentId: number | null; openWorkOrders: number[]; ovens: number; runs: number; workOrders: number };
+export type Fixtures = { token: string; siteId: number; siteOvens: number; trendOvenId: number; uploadOvenId: number; instrumentId: number | null; openWorkOrders: number[]; ovens: number; runs: number; workOrders: number };
 
 /**
  * What the requests need: an engineer's API token (made with the app's own token code), the oven
@@ -48,8 +48,9 @@ export async function fixtures(url: string): Promise<Fixtures> {
     const [last] = await db.select({ instrumentId: runs.instrumentId }).from(runs).where(eq(runs.ovenId, uploadOvenId)).orderBy(desc(runs.runAt)).limit(1);
     const open = await db.select({ id: workOrders.id }).from(workOrders).where(and(inArray(workOrders.state, ["open", "in_progress"]), eq(workOrders.breakdown, false))).orderBy(workOrders.id).limit(5000);
     const [{ n: woTotal }] = await db.select({ n: sql<number>`count(*)` }).from(workOrders);
+    const [site] = await db.select({ siteId: lines.siteId, n: sql<number>`count(*)` }).from(ovens).innerJoin(lines, eq(lines.id, ovens.lineId)).groupBy(lines.siteId).orderBy(lines.siteId).limit(1);
     return {
-      token: secret, trendOvenId: counts[0].ovenId, uploadOvenId, instrumentId: last?.instrumentId ?? null, openWorkOrders: open.map((o) => o.id),
+      token: secret, siteId: site.siteId, siteOvens: Number(site.n), trendOvenId: counts[0].ovenId, uploadOvenId, instrumentId: last?.instrumentId ?? null, openWorkOrders: open.map((o) => o.id),
       ovens: (await db.select({ id: ovens.id }).from(ovens)).length, runs: counts.reduce((s, c) => s + Number(c.n), 0), workOrders: Number(woTotal),
     };
   } finally {
