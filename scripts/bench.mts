@@ -73,7 +73,7 @@ const MEASURES: Measure[] = [
 ];
 const results: Record<string, Record<string, Timings>> = {};
 const described: string[] = [];
-const loads: { name: string; result: Awaited<ReturnType<typeof mixedLoad>> }[] = [];
+const loads: { name: string; result: Awaited<ReturnType<typeof mixedLoad>>; cpuMs: number | null }[] = [];
 
 for (const set of sets) {
   const fx = await fixtures(set.url);
@@ -101,7 +101,10 @@ for (const set of sets) {
     results[set.name] = r;
     if (args.load === "both" || args.load === set.name) {
       console.log(`Mixed load on the ${set.name} data: ${connections} connections for ${duration} s…`);
-      loads.push({ name: set.name, result: await mixedLoad(server.base, fx, { connections, duration }) });
+      const cpuBefore = server.cpuMs();
+      const result = await mixedLoad(server.base, fx, { connections, duration });
+      const cpuAfter = server.cpuMs();
+      loads.push({ name: set.name, result, cpuMs: cpuBefore === null || cpuAfter === null ? null : cpuAfter - cpuBefore });
     }
   } finally {
     await server.stop();
@@ -138,7 +141,7 @@ if (results.demo && results.large) {
   const ratio95 = percentile(results.large.fleet.server, 95) / percentile(results.demo.fleet.server, 95);
   console.log(`Fleet view large/demo ratio: median ${ratio.toFixed(2)}, p95 ${ratio95.toFixed(2)} (target < 2) — ${ratio < 2 ? "met" : "NOT met"}`);
 }
-for (const { name, result: r } of loads) {
+for (const { name, result: r, cpuMs } of loads) {
   console.log(`\nMixed load on the ${name} data (${connections} connections, ${r.duration} s; 4 reads and 2 writes per round):`);
   console.table([
     {
@@ -147,4 +150,9 @@ for (const { name, result: r } of loads) {
     },
   ]);
   console.log(`  status codes: ${Object.entries(r.statusCodeStats).map(([code, s]) => `${code} × ${s.count}`).join(", ")}`);
+  if (cpuMs !== null) {
+    // The app is one Node process: its CPU per request bounds what one core can serve, whatever the machine's load.
+    const per = cpuMs / Math.max(1, r.requests.total);
+    console.log(`  the app's CPU time: ${(cpuMs / 1000).toFixed(1)} s, ${per.toFixed(1)} ms per request (one core serves about ${(1000 / per).toFixed(0)} req/s of this mix)`);
+  }
 }

@@ -11,7 +11,34 @@ export function ensureBuild() {
   execFileSync(process.execPath, ["node_modules/next/dist/bin/next", "build"], { stdio: "inherit", env: { ...process.env, NODE_ENV: "production" } });
 }
 
-export type Server = { base: string; stop: () => Promise<void> };
+export type Server = { base: string; stop: () => Promise<void>; cpuMs: () => number | null };
+
+/**
+ * CPU time (user + system, ms) of a process and everything it started, from /proc: the app's
+ * own work during a load, whatever else the machine is doing. Null where there is no /proc.
+ */
+function treeCpuMs(root: number): number | null {
+  if (!fs.existsSync("/proc/self/stat")) return null;
+  const stats = fs.readdirSync("/proc").filter((d) => /^\d+$/.test(d)).flatMap((d) => {
+    try {
+      const f = fs.readFileSync(`/proc/${d}/stat`, "utf8").split(") ")[1].split(" ");
+      return [{ pid: Number(d), ppid: Number(f[1]), ticks: Number(f[11]) + Number(f[12]) }];
+    } catch {
+      return []; // gone meanwhile
+    }
+  });
+  const inTree = new Set([root]);
+  for (let grew = true; grew; ) {
+    grew = false;
+    for (const p of stats) {
+      if (!inTree.has(p.pid) && inTree.has(p.ppid)) {
+        inTree.add(p.pid);
+        grew = true;
+      }
+    }
+  }
+  return stats.filter((p) => inTree.has(p.pid)).reduce((sum, p) => sum + p.ticks, 0) * 10; // USER_HZ is 100 on Linux
+}
 
 /**
  * Starts the built app the way `npm run serve` does, on its own database and upload folder, with
@@ -46,6 +73,7 @@ export async function startServer({ databaseUrl, port, uploadDir }: { databaseUr
   }
   return {
     base,
+    cpuMs: () => treeCpuMs(child.pid!),
     stop: async () => {
       child.kill("SIGTERM");
       await Promise.race([exited, new Promise((r) => setTimeout(r, 10_000))]);
