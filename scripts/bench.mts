@@ -7,6 +7,8 @@
 // the round trip seen by this script. Then a mixed read/write load from autocannon (50
 // connections for 60 s by default; --duration 10 for a quick check). Builds the app when there
 // is no build. The machine's load is printed beside the figures: other work moves them.
+// LARGE_DATABASE_URL names another large database than file:./data/large.db; BENCH_PORT (or
+// --port) the port the app is started on, one data set at a time.
 import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
