@@ -68,21 +68,24 @@ export async function recomputeDrift(tx: DbOrTx, ovenId: number, metric: Tracked
  * newest (a back-dated upload).
  */
 export async function applyRunToDrift(tx: DbOrTx, run: { id: number; ovenId: number; runAt: Date } & Partial<Record<TrackedMetric, number | null>>) {
+  // The same for every metric: is the run the oven's newest, and the oven's detector settings.
+  const later = await tx
+    .select({ id: runs.id })
+    .from(runs)
+    .where(and(eq(runs.ovenId, run.ovenId), isNull(runs.deletedAt), gt(runs.runAt, run.runAt)))
+    .limit(1);
+  const params = await driftParams(tx, run.ovenId);
+  const states = new Map((await tx.select().from(driftStates).where(eq(driftStates.ovenId, run.ovenId))).map((s) => [s.metric, s]));
   for (const metric of TRACKED_METRICS) {
     const value = run[metric];
-    const [stored] = await tx.select().from(driftStates).where(and(eq(driftStates.ovenId, run.ovenId), eq(driftStates.metric, metric)));
+    const stored = states.get(metric);
     const baseline = stored?.baseline as StoredBaseline | undefined;
-    const later = await tx
-      .select({ id: runs.id })
-      .from(runs)
-      .where(and(eq(runs.ovenId, run.ovenId), isNull(runs.deletedAt), gt(runs.runAt, run.runAt)))
-      .limit(1);
     const canStep = stored?.state && baseline && !baseline.provisional && later.length === 0 && value != null && Number.isFinite(value);
     if (!canStep) {
       await recomputeDrift(tx, run.ovenId, metric);
       continue;
     }
-    const { state, pointResult: p } = stepDrift(stored.state as DriftState, { value: value!, at: run.runAt.getTime(), runId: run.id }, await driftParams(tx, run.ovenId));
+    const { state, pointResult: p } = stepDrift(stored.state as DriftState, { value: value!, at: run.runAt.getTime(), runId: run.id }, params);
     await tx.insert(driftPoints).values({ runId: run.id, metric, ovenId: run.ovenId, at: run.runAt, value: p.value, ewma: p.ewma, ewmaUcl: p.ewmaUcl, ewmaLcl: p.ewmaLcl, cusumHigh: p.cusumHigh, cusumLow: p.cusumLow, signals: p.signals });
     await tx.update(driftStates).set({ state, lastRunId: run.id, lastRunAt: run.runAt, updatedAt: new Date() }).where(and(eq(driftStates.ovenId, run.ovenId), eq(driftStates.metric, metric)));
   }

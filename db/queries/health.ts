@@ -11,6 +11,7 @@ import type { DriftState, SignalName } from "@/lib/drift/drift-types";
 import { METRIC_INFO, isTrackedMetric } from "@/lib/tracked-metrics";
 import type { ProcessWindow } from "@/lib/thermal/windows";
 import { systemUncertainty } from "./impact";
+import { runSummaries } from "./run-summary";
 import type { BaselineStats } from "@/lib/drift/baseline";
 
 /**
@@ -91,11 +92,12 @@ export async function computeOvenHealth(db: DbOrTx, ovenId: number, now: Date): 
 /** Recomputes and stores an oven's health; raises an alert when it worsened. Returns the alert, if any. */
 export async function refreshHealth(tx: DbOrTx, ovenId: number, now: Date, runId: number | null = null) {
   const next = await computeOvenHealth(tx, ovenId, now);
+  const runSummary = (await runSummaries(tx, [ovenId], now)).get(ovenId)!;
   const [prev] = await tx.select().from(ovenHealth).where(eq(ovenHealth.ovenId, ovenId));
   await tx
     .insert(ovenHealth)
-    .values({ ovenId, state: next.state, reasons: next.reasons, updatedAt: now })
-    .onConflictDoUpdate({ target: ovenHealth.ovenId, set: { state: next.state, reasons: next.reasons, updatedAt: now } });
+    .values({ ovenId, state: next.state, reasons: next.reasons, runSummary, updatedAt: now })
+    .onConflictDoUpdate({ target: ovenHealth.ovenId, set: { state: next.state, reasons: next.reasons, runSummary, updatedAt: now } });
   if (!worsened(prev?.state as HealthState | undefined, next.state)) return null;
   const [alert] = await tx
     .insert(alerts)

@@ -42,24 +42,33 @@ export async function getTrend(db: DbOrTx, ovenId: number, metric: TrackedMetric
   const where: SQL[] = [eq(runs.ovenId, ovenId), isNull(runs.deletedAt), isNotNull(col)];
   if (range.from) where.push(gte(runs.runAt, range.from));
   if (range.to) where.push(lte(runs.runAt, range.to));
-  const rows = await db
-    .select({ runId: runs.id, at: runs.runAt, value: col, ewma: driftPoints.ewma, ewmaUcl: driftPoints.ewmaUcl, ewmaLcl: driftPoints.ewmaLcl, cusumHigh: driftPoints.cusumHigh, cusumLow: driftPoints.cusumLow, signals: driftPoints.signals })
-    .from(runs)
-    .leftJoin(driftPoints, and(eq(driftPoints.runId, runs.id), eq(driftPoints.metric, metric)))
-    .where(and(...where))
-    .orderBy(asc(runs.runAt), asc(runs.id));
-  const all: (TrendPoint & { at: number })[] = rows.map((r) => ({
-    runId: r.runId,
-    at: r.at.getTime(),
-    runAt: r.at.toISOString(),
-    value: r.value as number,
-    ewma: r.ewma,
-    ewmaUcl: r.ewmaUcl,
-    ewmaLcl: r.ewmaLcl,
-    cusumHigh: r.cusumHigh,
-    cusumLow: r.cusumLow,
-    signals: r.signals ?? [],
-  }));
+  // Every run's value, then the drift results (stored only for the runs after the baseline),
+  // matched here: joining them in SQL sent nine mostly empty columns for each of the years of
+  // runs, and reading those rows was most of the request.
+  const rows = await db.select({ runId: runs.id, at: runs.runAt, value: col }).from(runs).where(and(...where)).orderBy(asc(runs.runAt), asc(runs.id));
+  const drift = new Map(
+    (
+      await db
+        .select({ runId: driftPoints.runId, ewma: driftPoints.ewma, ewmaUcl: driftPoints.ewmaUcl, ewmaLcl: driftPoints.ewmaLcl, cusumHigh: driftPoints.cusumHigh, cusumLow: driftPoints.cusumLow, signals: driftPoints.signals })
+        .from(driftPoints)
+        .where(and(eq(driftPoints.ovenId, ovenId), eq(driftPoints.metric, metric), ...(range.from ? [gte(driftPoints.at, range.from)] : []), ...(range.to ? [lte(driftPoints.at, range.to)] : [])))
+    ).map((d) => [d.runId, d]),
+  );
+  const all: (TrendPoint & { at: number })[] = rows.map((r) => {
+    const d = drift.get(r.runId);
+    return {
+      runId: r.runId,
+      at: r.at.getTime(),
+      runAt: r.at.toISOString(),
+      value: r.value as number,
+      ewma: d?.ewma ?? null,
+      ewmaUcl: d?.ewmaUcl ?? null,
+      ewmaLcl: d?.ewmaLcl ?? null,
+      cusumHigh: d?.cusumHigh ?? null,
+      cusumLow: d?.cusumLow ?? null,
+      signals: d?.signals ?? [],
+    };
+  });
   // Keep every point that carries a signal; thin the rest to what a chart can show.
   const points = all.length > 1000 ? mergeSignals(downsampleForChart(all, 1000), all) : all;
 

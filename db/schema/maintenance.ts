@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import { integer, real, sqliteTable, text, index, uniqueIndex } from "drizzle-orm/sqlite-core";
 import { ovens } from "./fleet";
 import { users, ROLES } from "./users";
@@ -97,6 +98,9 @@ export const workOrders = sqliteTable(
     index("work_order_state_due_idx").on(t.state, t.dueAt),
     index("work_order_assignee_idx").on(t.assigneeId),
     index("work_order_due_idx").on(t.dueAt),
+    // The list's order (undated last, then due, then id), so a page is read off the index
+    // instead of sorting every order: 60 000 of them on the large data set.
+    index("work_order_list_order_idx").on(sql`(due_at is null)`, t.dueAt, t.id),
     index("work_order_kind_idx").on(t.kind),
   ],
 );

@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import { blob, integer, real, sqliteTable, text, index } from "drizzle-orm/sqlite-core";
 import type { ProcessWindow } from "@/lib/thermal/windows";
 import type { VerdictItems } from "@/lib/thermal/types";
@@ -68,11 +69,16 @@ export const runs = sqliteTable(
   (t) => [
     index("run_oven_time_idx").on(t.ovenId, t.runAt),
     index("run_time_idx").on(t.runAt),
+    // Live (not deleted) runs only, so the lists' counts and pages read the index alone: the
+    // plant-wide runs list counted 219 000 table rows per request on the large data set.
+    index("run_live_time_idx").on(t.runAt, t.id).where(sql`deleted_at is null`),
+    // The fleet view's latest run and 30-day ΔT per oven, without a table read per run.
+    index("run_oven_live_idx").on(t.ovenId, t.runAt, t.deltaTPeak).where(sql`deleted_at is null`),
     index("run_window_idx").on(t.windowId),
     index("run_board_idx").on(t.boardId),
     index("run_instrument_idx").on(t.instrumentId, t.runAt),
     index("run_calibration_idx").on(t.calibrationId),
-    index("run_verdict_idx").on(t.verdictStatus, t.runAt),
+    index("run_verdict_idx").on(t.verdictStatus, t.runAt).where(sql`deleted_at is null`),
     index("run_file_idx").on(t.fileSha256),
     index("run_created_by_idx").on(t.createdBy),
   ],

@@ -30,11 +30,17 @@ function templatesFor(tag: string, isLab: boolean): PmTemplate[] {
   return REFLOW_PM_TEMPLATES.filter((t) => (t.whereFitted !== "nitrogen" || NITROGEN_OVENS.has(tag)) && !(isLab && LINE_ONLY.has(t.id)));
 }
 
-async function ensurePlans(tx: DbOrTx, oven: { id: number; tag: string; isLab: boolean; timeZone: string }, createdAt: Date, engineerId: string | null) {
+export async function ensurePlans(
+  tx: DbOrTx,
+  oven: { id: number; tag: string; isLab: boolean; timeZone: string },
+  createdAt: Date,
+  engineerId: string | null,
+  templates: PmTemplate[] = templatesFor(oven.tag, oven.isLab),
+) {
   // Only the seed's own plans (those made from a template); plans people added are theirs.
   const existing = await tx.select().from(maintenancePlans).where(and(eq(maintenancePlans.ovenId, oven.id), isNotNull(maintenancePlans.templateId)));
   const have = new Set(existing.map((p) => p.templateId));
-  const fresh = templatesFor(oven.tag, oven.isLab)
+  const fresh = templates
     .filter((t) => !have.has(t.id))
     .map((t) => ({
       ovenId: oven.id,
@@ -59,7 +65,7 @@ async function ensurePlans(tx: DbOrTx, oven: { id: number; tag: string; isLab: b
 }
 
 /** How one past order went: most on time, some late, a few never done (still overdue now). */
-function outcome(o: NewOrder, plan: PlanRow, now: Date, rand: () => number, techId: string | null, usage = false): NewOrder {
+export function outcome(o: NewOrder, plan: PlanRow, now: Date, rand: () => number, techId: string | null, usage = false): NewOrder {
   const due = (o.dueAt as Date).getTime();
   if (due >= now.getTime()) return { ...o, assigneeId: rand() < 0.5 ? techId : null };
   const age = (now.getTime() - due) / DAY;
@@ -128,7 +134,7 @@ async function ensureOneOffs(tx: DbOrTx, byTag: Map<string, number>, now: Date, 
   return n;
 }
 
-async function ensureMeters(tx: DbOrTx, ovenRows: { id: number; tag: string; isLab: boolean }[], now: Date, rand: () => number) {
+export async function ensureMeters(tx: DbOrTx, ovenRows: { id: number; tag: string; isLab: boolean }[], now: Date, rand: () => number, historyDays = HISTORY_DAYS) {
   const withReadings = new Set((await tx.selectDistinct({ ovenId: meterReadings.ovenId }).from(meterReadings)).map((r) => r.ovenId));
   const rows: (typeof meterReadings.$inferInsert)[] = [];
   for (const o of ovenRows) {
@@ -136,7 +142,7 @@ async function ensureMeters(tx: DbOrTx, ovenRows: { id: number; tag: string; isL
     const perDay = o.isLab ? 5 : 19;
     let heater = o.isLab ? 4200 : 21_000 + o.id * 1300;
     let cycles = o.isLab ? 900 : 0;
-    for (let d = HISTORY_DAYS; d >= 1; d -= 7) {
+    for (let d = historyDays; d >= 1; d -= 7) {
       heater += Math.round(perDay * 7 * (0.85 + rand() * 0.3));
       cycles += o.isLab ? Math.round(20 + rand() * 15) : 0;
       const at = new Date(now.getTime() - d * DAY - 4 * 3_600_000); // 08:00 UTC

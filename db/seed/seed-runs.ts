@@ -18,7 +18,7 @@ import { OVEN_STORIES, modelFor, type OvenStory } from "./run-stories";
 import { simulateRun } from "./run-model";
 
 const DAY = 86_400_000;
-const WINDOWS = [
+export const WINDOWS = [
   // The plant's own limit on the critical-phase spread (13 °C) lets drift tracking project towards it.
   { name: "SAC305 — Brightwater standard", presetId: "sac305-typical", overrides: { criticalSpreadMax: 13 } },
   { name: "Sn63Pb37 — legacy builds", presetId: "sn63pb37-typical" },
@@ -90,6 +90,17 @@ function certificatePdf(line: string): string {
   ].join("\n");
 }
 
+/** A simulated run's metrics and verdict, as the analysis of its logger file gives them (1 Hz, °C). */
+export function analyseSimulated(sim: { time: Float64Array; channels: Float64Array[] }, window: ProcessWindow, meta: { durationSeconds: number; skewSeconds: number; offsets: Record<string, number> }) {
+  const channels = sim.channels.map((values, i) => ({ name: `TC${i + 1}`, values }));
+  const metrics = computeMetrics({ time: sim.time, channels }, window);
+  const analysis: AnalysisResult = {
+    channels: metrics.channels, board: metrics.board, verdict: judge(metrics.board, window),
+    meta: { rows: sim.time.length, channels: channels.length, durationSeconds: meta.durationSeconds, sampleInterval: 1, units: "C", warnings: metrics.warnings, skewSeconds: meta.skewSeconds, offsets: meta.offsets },
+  };
+  return { analysis, channels };
+}
+
 function toCsv(time: Float64Array, channels: Float64Array[]): string {
   const lines = [["Time (s)", ...channels.map((_, i) => `TC${i + 1} (°C)`)].join(",")];
   for (let k = 0; k < time.length; k++) lines.push([String(time[k]), ...channels.map((c) => c[k].toFixed(1))].join(","));
@@ -119,13 +130,8 @@ async function seedOvenRuns(db: Db, story: OvenStory, ovenId: number, ids: Ids, 
       const runAt = new Date(start + day * DAY + story.minuteOfDay * 60_000 + Math.floor(random() * 20) * 60_000);
       const { model, startState } = modelFor(story, day, n, runAt, random);
       const sim = simulateRun(model);
-      const channels = sim.channels.map((values, i) => ({ name: `TC${i + 1}`, values }));
-      const metrics = computeMetrics({ time: sim.time, channels }, ids.window);
       const cal = offsetsAt(story.loggerSerial, start, runAt.getTime());
-      const analysis: AnalysisResult = {
-        channels: metrics.channels, board: metrics.board, verdict: judge(metrics.board, ids.window),
-        meta: { rows: sim.time.length, channels: 8, durationSeconds: model.durationSeconds, sampleInterval: 1, units: "C", warnings: metrics.warnings, skewSeconds: story.skew, offsets: cal.offsets },
-      };
+      const { analysis, channels } = analyseSimulated(sim, ids.window, { durationSeconds: model.durationSeconds, skewSeconds: story.skew, offsets: cal.offsets });
       // The newest run of each oven keeps its logger file, so the download can be tried on the demo.
       let fileSha256: string | null = null;
       if (n === days.length - 1) {

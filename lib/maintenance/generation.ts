@@ -10,7 +10,7 @@ import type { WorkOrderState } from "./work-order-state";
 export const DEFAULT_LOOK_AHEAD_DAYS = 14;
 const DAY_MS = 86_400_000;
 /** One run never returns more than this; the next run continues where it stopped. */
-const MAX_PER_RUN = 500;
+export const MAX_PER_RUN = 500;
 
 export type CalendarPlan = RecurrenceSource & {
   id: string;
