@@ -50,6 +50,8 @@ export async function startServer({ databaseUrl, port, uploadDir }: { databaseUr
     env: {
       ...process.env, NODE_ENV: "production", DATABASE_URL: databaseUrl, PORT: String(port), UPLOAD_DIR: uploadDir, SCHEDULER: "off", SMTP_SINK: "off",
       DEMO_MODE: "off", AUTH_SECRET: "benchmark-only-secret-0123456789abcdef", AUTH_URL: base,
+      // One token drives every connection of the load: the per-token limit would answer 429.
+      API_RATE_LIMIT_PER_MINUTE: "0",
     },
     stdio: ["ignore", "pipe", "pipe"],
   });
