@@ -4,6 +4,7 @@ import path from "node:path";
 import { createClient, type Client } from "@libsql/client";
 import { tableCounts } from "./table-digest";
 import { referencePresent, uploadReferences } from "./upload-references";
+import { syncPath } from "../../lib/storage/fsync";
 
 /*
  * An online backup of the embedded database while the app runs. `VACUUM INTO` reads the database
@@ -53,17 +54,6 @@ export function sha256File(file: string): string {
   return h.digest("hex");
 }
 
-export function syncPath(p: string) {
-  let fd: number | undefined;
-  try {
-    fd = fs.openSync(p, "r");
-    fs.fsyncSync(fd);
-  } catch {
-    // Folders cannot be opened for syncing on every platform.
-  } finally {
-    if (fd !== undefined) fs.closeSync(fd);
-  }
-}
 
 /** integrity_check, applied migrations and row counts of a database file (opened only to read). */
 export async function inspectDatabase(file: string) {

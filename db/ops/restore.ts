@@ -1,6 +1,7 @@
 import fs from "node:fs";
 import path from "node:path";
-import { copyUploads, databaseFile, inspectDatabase, OpsError, sha256File, syncPath, type BackupManifest } from "./backup";
+import { copyUploads, databaseFile, inspectDatabase, OpsError, sha256File, type BackupManifest } from "./backup";
+import { syncPath } from "../../lib/storage/fsync";
 import { referencePresent } from "./upload-references";
 
 /*

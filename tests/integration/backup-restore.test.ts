@@ -12,7 +12,7 @@ import { backupDatabase, databaseFile } from "@/db/ops/backup";
 import { restoreDatabase } from "@/db/ops/restore";
 import { tableDigests } from "@/db/ops/table-digest";
 import { uploadReferences } from "@/db/ops/upload-references";
-import { writeFileDurably } from "@/lib/storage/local-driver";
+import { writeFileDurably } from "@/lib/storage/fsync";
 import { contentKey } from "@/lib/storage/content-hash";
 import { actorFor, createTestDb } from "./test-db";
 
