@@ -74,7 +74,9 @@ export function outcome(o: NewOrder, plan: PlanRow, now: Date, rand: () => numbe
   // Recent work is often still open; older misses are weekly-or-rarer tasks a few weeks late
   // (a daily clean missed a month ago is simply skipped, not left open).
   const daily = plan.rrule?.includes("FREQ=DAILY") ?? false;
-  const overdueChance = age < 12 ? 0.35 : age < 45 && !daily ? 0.05 : 0;
+  // A daily task missed more than a few days ago is mostly skipped too, so My work stays a list
+  // a technician can get through.
+  const overdueChance = age < 3 ? 0.35 : age < 12 ? (daily ? 0.05 : 0.35) : age < 45 && !daily ? 0.05 : 0;
   if (r < overdueChance) return { ...o, assigneeId: rand() < 0.6 ? techId : null };
   if (r < overdueChance + 0.015) return { ...o, state: "cancelled", touched: true, notes: "Line down for changeover; skipped." };
   const late = r > 0.9;

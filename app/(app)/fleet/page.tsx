@@ -95,8 +95,10 @@ export default async function FleetPage({ searchParams }: { searchParams: Promis
                 <span className="text-sm">
                   {o.lastRun ? (
                     <>
-                      Last run {formatAgo(new Date(o.lastRun.runAt), now)} · <span className={`font-semibold ${VERDICT_STYLE[o.lastRun.verdict] ?? ""}`}>{o.lastRun.verdict}</span>
-                      {o.lastRun.windowUse != null ? <span className="num text-ink-muted"> {o.lastRun.windowUse.toFixed(0)} %</span> : null}
+                      Last run {formatAgo(new Date(o.lastRun.runAt), now)} · <span className="whitespace-nowrap">
+                        <span className={`font-semibold ${VERDICT_STYLE[o.lastRun.verdict] ?? ""}`}>{o.lastRun.verdict}</span>
+                        {o.lastRun.windowUse != null ? <span className="num text-ink-muted"> {o.lastRun.windowUse.toFixed(0)} %</span> : null}
+                      </span>
                     </>
                   ) : (
                     <span className="text-ink-muted">No runs yet</span>

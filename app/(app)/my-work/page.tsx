@@ -10,12 +10,15 @@ import { requirePermission } from "@/lib/session";
 import { StartButton } from "./start-button";
 
 export const metadata = { title: "My work" };
+/** Yours due within this many days (anyone's only when due within a day). */
+const MY_DAYS = 3;
+const DAY_MS = 86_400_000;
 export const dynamic = "force-dynamic";
 
 export default async function MyWorkPage() {
   const actor = await requirePermission("workorder.update");
   const now = new Date();
-  const rows = await listMyWork(await getDb(), actor.userId, now);
+  const rows = await listMyWork(await getDb(), actor.userId, now, MY_DAYS);
   // Overdue first (oldest first), then the rest by due time; work already started leads each group.
   const sorted = [...rows].sort((a, b) => {
     const ao = isOverdue(a.order, now) ? 0 : 1;
@@ -23,18 +26,30 @@ export default async function MyWorkPage() {
     if (ao !== bo) return ao - bo;
     return (a.order.dueAt?.getTime() ?? Infinity) - (b.order.dueAt?.getTime() ?? Infinity);
   });
-  const overdue = sorted.filter((r) => isOverdue(r.order, now)).length;
+  const overdue = sorted.filter((r) => isOverdue(r.order, now));
+  const today = sorted.filter((r) => !isOverdue(r.order, now) && (r.order.dueAt?.getTime() ?? Infinity) < now.getTime() + DAY_MS);
+  const later = sorted.filter((r) => !overdue.includes(r) && !today.includes(r));
+  const groups = [
+    { title: "Overdue", rows: overdue },
+    { title: "Due today", rows: today },
+    { title: `Coming ${MY_DAYS} days`, rows: later },
+  ].filter((g) => g.rows.length > 0);
   return (
     <div className="mx-auto max-w-2xl">
       <PageHeader
         title="My work"
-        subtitle={`${sorted.length} order${sorted.length === 1 ? "" : "s"}: yours due within 7 days, and anyone's due today${overdue ? ` · ${overdue} overdue` : ""}`}
+        subtitle={`${sorted.length} order${sorted.length === 1 ? "" : "s"}: yours due within ${MY_DAYS} days, and anyone's due today${overdue.length ? ` · ${overdue.length} overdue` : ""}`}
       />
       {sorted.length === 0 ? (
-        <EmptyState title="Nothing due">No work orders are assigned to you for the next 7 days, and none is waiting for someone today.</EmptyState>
+        <EmptyState title="Nothing due">No work orders are assigned to you for the next {MY_DAYS} days, and none is waiting for someone today.</EmptyState>
       ) : (
-        <ul className="space-y-3" aria-label="Work orders">
-          {sorted.map(({ order: o, ovenTag, timeZone, assigneeName }) => {
+        groups.map((g) => (
+        <section key={g.title} aria-label={g.title} className="mb-6">
+        <h2 className="mb-2 text-sm font-semibold uppercase tracking-wide text-ink-muted">
+          {g.title} <span className="num font-normal">({g.rows.length})</span>
+        </h2>
+        <ul className="space-y-3" aria-label={`Work orders: ${g.title.toLowerCase()}`}>
+          {g.rows.map(({ order: o, ovenTag, timeZone, assigneeName }) => {
             const late = isOverdue(o, now);
             return (
               <li key={o.id} className={`card p-3 ${late ? "border-health-act/40" : ""}`} data-testid="my-work-item">
@@ -70,6 +85,8 @@ export default async function MyWorkPage() {
             );
           })}
         </ul>
+        </section>
+        ))
       )}
     </div>
   );
