@@ -105,6 +105,9 @@ export async function ordersOwed(db: DbOrTx, plans: { plan: PlanRow; timeZone: s
       });
       for (const c of due.crossed) out.push(orderFromPlan(plan, c.occurrenceKey, c.reachedAt));
     } else if (plan.everyRuns) {
+      // Every tick asks; a count on the index answers "not yet" without reading the run history.
+      const counted = await db.$count(runs, runsOfPlan(plan, now));
+      if (counted < (lastThreshold(have) ?? 0) + plan.everyRuns) continue;
       const due = await dueByRunsForPlan(db, plan, have, now);
       for (const c of due.crossed) out.push(orderFromPlan(plan, c.occurrenceKey, c.reachedAt));
     }
@@ -118,6 +121,8 @@ export function lastThreshold(keys: Iterable<string>): number | null {
   return values.length ? Math.max(...values) : null;
 }
 
+const runsOfPlan = (plan: PlanRow, now: Date) => and(eq(runs.ovenId, plan.ovenId), isNull(runs.deletedAt), gte(runs.runAt, plan.createdAt), lte(runs.runAt, now));
+
 /**
  * A run-count plan counts the oven's verification runs since the plan began (deleted runs do
  * not count); each multiple of N is one occurrence with a stable key.
@@ -126,7 +131,7 @@ export async function dueByRunsForPlan(db: DbOrTx, plan: PlanRow, keys: Set<stri
   const rows = await db
     .select({ at: runs.runAt })
     .from(runs)
-    .where(and(eq(runs.ovenId, plan.ovenId), isNull(runs.deletedAt), gte(runs.runAt, plan.createdAt), lte(runs.runAt, now)))
+    .where(runsOfPlan(plan, now))
     .orderBy(asc(runs.runAt));
   return dueByRuns({ planId: String(plan.id), everyRuns: plan.everyRuns!, runs: rows.map((r) => r.at), since: plan.createdAt, lastTriggeredThreshold: lastThreshold(keys), now });
 }

@@ -1,5 +1,6 @@
 import crypto from "node:crypto";
 import fs from "node:fs";
+import fsp from "node:fs/promises";
 import path from "node:path";
 
 /**
@@ -9,22 +10,24 @@ import path from "node:path";
  * process nor a power cut leaves a row pointing at a missing or half-written file. An existing
  * file is never rewritten (put checks first): rows may refer to it.
  */
-export function writeFileDurably(abs: string, bytes: Uint8Array): void {
+export async function writeFileDurably(abs: string, bytes: Uint8Array): Promise<void> {
+  // Asynchronous throughout: a flush of a 20 MB logger file must not stop the server's other requests.
   const dir = path.dirname(abs);
-  fs.mkdirSync(dir, { recursive: true });
+  await fsp.mkdir(dir, { recursive: true });
   const tmp = `${abs}.${crypto.randomUUID()}.tmp`;
-  const fd = fs.openSync(tmp, "w");
+  const file = await fsp.open(tmp, "w");
   try {
-    fs.writeSync(fd, bytes);
-    fs.fsyncSync(fd);
+    await file.writeFile(bytes);
+    await file.sync();
   } finally {
-    fs.closeSync(fd);
+    await file.close();
   }
-  fs.renameSync(tmp, abs);
-  syncPath(dir);
+  await fsp.rename(tmp, abs);
+  const folder = await fsp.open(dir, "r").catch(() => null); // not every platform opens folders
+  if (folder) await folder.sync().catch(() => undefined).finally(() => folder.close());
 }
 
-/** Flushes a file or folder entry to disk; folders cannot be opened for syncing on every platform. */
+/** Flushes a file or folder entry to disk, for the backup scripts; folders cannot be opened for syncing on every platform. */
 export function syncPath(p: string) {
   let fd: number | undefined;
   try {

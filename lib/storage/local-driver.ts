@@ -25,7 +25,7 @@ export function localBlobStore(dir: string): BlobStore {
     exists,
     async put(sha, bytes) {
       if (await exists(sha)) return { created: false };
-      writeFileDurably(fanned(sha), bytes);
+      await writeFileDurably(fanned(sha), bytes);
       return { created: true };
     },
     async get(sha) {

@@ -18,11 +18,9 @@ export function sniffFileType(bytes: Uint8Array): SniffedType | null {
   return null;
 }
 
-/** Calibration certificates: PDF, PNG or JPEG only, at most 10 MB. */
+/** Calibration certificates: PDF, PNG or JPEG only (a WebP is a photo, not a certificate), at most 10 MB. */
 export function sniffCertificate(bytes: Uint8Array): "application/pdf" | "image/png" | "image/jpeg" | null {
-  if (bytes.length >= 5 && bytes[0] === 0x25 && bytes[1] === 0x50 && bytes[2] === 0x44 && bytes[3] === 0x46 && bytes[4] === 0x2d) return "application/pdf";
-  if (bytes.length >= 8 && bytes[0] === 0x89 && bytes[1] === 0x50 && bytes[2] === 0x4e && bytes[3] === 0x47 && bytes[4] === 0x0d && bytes[5] === 0x0a && bytes[6] === 0x1a && bytes[7] === 0x0a) return "image/png";
-  if (bytes.length >= 3 && bytes[0] === 0xff && bytes[1] === 0xd8 && bytes[2] === 0xff) return "image/jpeg";
-  return null;
+  const type = sniffFileType(bytes)?.contentType;
+  return type && type !== "image/webp" ? type : null;
 }
-export const MAX_CERTIFICATE_BYTES = 10 * 1024 * 1024;
+export const MAX_CERTIFICATE_BYTES = MAX_UPLOAD_BYTES;

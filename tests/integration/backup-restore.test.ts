@@ -56,7 +56,7 @@ async function writeStep(uploadDir: string, step: number, midway?: () => Promise
   const [order] = await t.db.select().from(workOrders).where(eq(workOrders.state, "open")).orderBy(workOrders.id).limit(1);
   const bytes = Buffer.from(`%PDF-1.7\nbackup test step ${step} ${crypto.randomUUID()}\n`);
   const sha = sha256(bytes);
-  writeFileDurably(path.join(uploadDir, contentKey(sha)), bytes);
+  await writeFileDurably(path.join(uploadDir, contentKey(sha)), bytes);
   await t.db.transaction(async (tx) => {
     const [att] = await tx.insert(workOrderAttachments).values({ workOrderId: order.id, sha256: sha, fileName: `step-${step}.pdf`, contentType: "application/pdf", sizeBytes: bytes.length, uploadedById: actor.userId }).returning();
     if (midway) await midway();
@@ -71,7 +71,7 @@ describe("db:backup and db:restore", () => {
     const uploadDir = path.join(dir, "uploads");
     // The seeded rows' logger files live beside the shared template; stand-ins here give every
     // row its file, so the backup must report none missing.
-    for (const ref of await uploadReferences(reader)) writeFileDurably(path.join(uploadDir, ref.path), Buffer.from(`seeded ${ref.sha256}`));
+    for (const ref of await uploadReferences(reader)) await writeFileDurably(path.join(uploadDir, ref.path), Buffer.from(`seeded ${ref.sha256}`));
 
     await writeStep(uploadDir, 1);
     const before = await tableDigests(reader);
