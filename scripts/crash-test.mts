@@ -15,7 +15,7 @@ import { seedDemo } from "../db/seed/seed-demo";
 import { createApiToken } from "../db/queries/api-tokens";
 import { getUserByEmail } from "../db/queries/users";
 import { workOrders } from "../db/schema/maintenance";
-import { crashApp, killApp, startApp, stopApp, type AppConfig, type AppProcess } from "../tests/crash/app-process";
+import { startBuiltApp, type BuiltApp } from "./support/app-process";
 import { fireBurst, planBurst, warmUp, type OpenOrder, type Outcome } from "../tests/crash/burst";
 import { checkRequests } from "../tests/crash/check-requests";
 import { checkInvariants } from "../tests/crash/check-invariants";
@@ -34,7 +34,7 @@ if (!fs.existsSync(".next/BUILD_ID")) {
 const started = Date.now();
 const secs = (from: number) => `${((Date.now() - from) / 1000).toFixed(1)} s`;
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), "ovenward-crash-"));
-const cfg: AppConfig = {
+const cfg = {
   databaseUrl: `file:${path.join(dir, "ovenward.db")}`,
   uploadDir: path.join(dir, "uploads"),
   port: Number(process.env.CRASH_PORT ?? 3230),
@@ -64,7 +64,20 @@ const failures: string[] = [];
 
 let last = { found: 0, inFlightFound: 0, halfWritten: 0 };
 
-async function verify(app: AppProcess, label: string) {
+/** The built app with the scheduler and the SMTP sink on, as production runs it. */
+const startApp = () =>
+  startBuiltApp({
+    name: "app",
+    port: cfg.port,
+    logFile: cfg.logFile,
+    timeoutMs: 90_000,
+    env: {
+      DATABASE_URL: cfg.databaseUrl, UPLOAD_DIR: cfg.uploadDir, AUTH_SECRET: "crash-test-secret-0123456789abcdef",
+      SMTP_SINK: "on", SMTP_SINK_PORT: String(cfg.smtpPort), SMTP_URL: `smtp://127.0.0.1:${cfg.smtpPort}`, SCHEDULER: "on", DEMO_MODE: "off",
+    },
+  });
+
+async function verify(app: BuiltApp, label: string) {
   const { db, client } = await openDatabase(cfg.databaseUrl);
   last = { found: 0, inFlightFound: 0, halfWritten: 0 };
   try {
@@ -73,7 +86,7 @@ async function verify(app: AppProcess, label: string) {
     last.halfWritten = inv.halfWritten;
     const lines = [];
     for (const [i, round] of rounds.entries()) {
-      const c = await checkRequests(client, app.baseUrl, token, round.outcomes);
+      const c = await checkRequests(client, app.url, token, round.outcomes);
       failures.push(...c.failures.map((f) => `${label}, requests of round ${i + 1}: ${f}`));
       last.found += c.found;
       last.inFlightFound += c.inFlightFound;
@@ -91,26 +104,26 @@ async function verify(app: AppProcess, label: string) {
   }
 }
 
-let app: AppProcess | null = null;
+let app: BuiltApp | null = null;
 // The app runs in its own process group, so an interrupted test must take it down itself.
 for (const signal of ["SIGINT", "SIGTERM"] as const) {
   process.on(signal, () => {
-    if (app) killApp(app, "SIGKILL");
+    app?.kill("SIGKILL");
     console.error(`Interrupted; files left in ${dir}`);
     process.exit(130);
   });
 }
 try {
   t = Date.now();
-  app = await startApp(cfg);
-  console.log(`App started in ${secs(t)} on ${app.baseUrl}`);
+  app = await startApp();
+  console.log(`App started in ${secs(t)} on ${app.url}`);
   for (let round = 0; round < ROUNDS; round++) {
     const killAfter = KILL_AFTER[round % KILL_AFTER.length];
     const planned = planBurst(round, ovenIds, orders.slice(round * PER_ROUND.closes, (round + 1) * PER_ROUND.closes), PER_ROUND);
-    await warmUp(app.baseUrl, token, ovenIds[0], orders[0].id);
+    await warmUp(app.url, token, ovenIds[0], orders[0].id);
     t = Date.now();
-    const running: AppProcess = app;
-    const { outcomes } = await fireBurst(running.baseUrl, token, planned, killAfter, () => crashApp(running));
+    const running: BuiltApp = app;
+    const { outcomes } = await fireBurst(running.url, token, planned, killAfter, () => running.crash());
     rounds.push({ outcomes, killAfter });
     for (const o of outcomes.filter((x) => x.status !== null && (x.status < 200 || x.status >= 300))) {
       failures.push(`round ${round + 1}: ${o.kind} answered ${o.status} ${JSON.stringify(o.body).slice(0, 200)}`);
@@ -122,7 +135,7 @@ try {
         `(${late} more were already on their way back, ${outcomes.filter((o) => o.status === null).length} never answered), ${secs(t)}`,
     );
     t = Date.now();
-    app = await startApp(cfg);
+    app = await startApp();
     console.log(`Restarted on the same database in ${secs(t)}`);
     t = Date.now();
     await verify(app, `After kill ${round + 1}`);
@@ -133,7 +146,7 @@ try {
 } catch (err) {
   failures.push(`crash test stopped: ${(err as Error).stack ?? err}`);
 } finally {
-  if (app) await stopApp(app);
+  if (app) await app.stop();
 }
 
 const all = rounds.flatMap((r) => r.outcomes);

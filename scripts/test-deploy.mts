@@ -6,7 +6,8 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { HeadObjectCommand, S3Client } from "@aws-sdk/client-s3";
-import { portFrom, startInstance, startSqld, type Proc } from "./support/deploy-stack";
+import { portFrom, startInstance, startSqld } from "./support/deploy-stack";
+import type { Started } from "./support/app-process";
 import { startFakeS3, type FakeS3 } from "./support/fake-s3";
 import { checkCron, checkSharedRun, checkSignedIn, type Check } from "./support/deploy-checks";
 
@@ -16,7 +17,7 @@ if (!fs.existsSync(".next/BUILD_ID")) {
 }
 const began = Date.now();
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), "ovenward-deploy-"));
-const procs: Proc[] = [];
+const procs: Started[] = [];
 let s3: FakeS3 | null = null;
 let closeDb: (() => void) | null = null;
 let closeSink: (() => void) | null = null;

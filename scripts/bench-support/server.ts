@@ -1,5 +1,7 @@
-import { execFileSync, spawn } from "node:child_process";
+import { execFileSync } from "node:child_process";
 import fs from "node:fs";
+import path from "node:path";
+import { startBuiltApp } from "../support/app-process";
 
 /** The production build the benchmark serves; builds it when there is none. */
 export function ensureBuild() {
@@ -45,41 +47,15 @@ function treeCpuMs(root: number): number | null {
  * the scheduler and the SMTP sink off (a tick in the middle of a measurement is noise, not load).
  */
 export async function startServer({ databaseUrl, port, uploadDir }: { databaseUrl: string; port: number; uploadDir: string }): Promise<Server> {
-  const base = `http://localhost:${port}`;
-  const child = spawn(process.execPath, ["--import", "tsx", "--import", "./scripts/_shims/server-only.mjs", "scripts/serve.mts"], {
+  const app = await startBuiltApp({
+    name: "the app",
+    port,
+    logFile: path.join(path.dirname(uploadDir), `app-${port}-${path.basename(uploadDir)}.log`),
     env: {
-      ...process.env, NODE_ENV: "production", DATABASE_URL: databaseUrl, PORT: String(port), UPLOAD_DIR: uploadDir, SCHEDULER: "off", SMTP_SINK: "off",
-      DEMO_MODE: "off", AUTH_SECRET: "benchmark-only-secret-0123456789abcdef", AUTH_URL: base,
+      DATABASE_URL: databaseUrl, UPLOAD_DIR: uploadDir, SCHEDULER: "off", SMTP_SINK: "off", DEMO_MODE: "off", AUTH_SECRET: "benchmark-only-secret-0123456789abcdef",
       // One token drives every connection of the load: the per-token limit would answer 429.
       API_RATE_LIMIT_PER_MINUTE: "0",
     },
-    stdio: ["ignore", "pipe", "pipe"],
   });
-  let output = "";
-  child.stdout!.on("data", (d) => (output += d));
-  child.stderr!.on("data", (d) => (output += d));
-  const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
-  const deadline = Date.now() + 120_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`The server exited (code ${child.exitCode}):\n${output}`);
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) break;
-    } catch {
-      // not listening yet
-    }
-    if (Date.now() > deadline) {
-      child.kill("SIGTERM");
-      throw new Error(`The server did not answer on ${base} within 2 minutes:\n${output}`);
-    }
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  return {
-    base,
-    cpuMs: () => treeCpuMs(child.pid!),
-    stop: async () => {
-      child.kill("SIGTERM");
-      await Promise.race([exited, new Promise((r) => setTimeout(r, 10_000))]);
-      if (child.exitCode === null) child.kill("SIGKILL");
-    },
-  };
+  return { base: app.url, cpuMs: () => treeCpuMs(app.child.pid!), stop: () => app.stop() };
 }

@@ -6,17 +6,11 @@ import { eq, sql } from "drizzle-orm";
 import { openDatabase, type Db } from "@/db/client";
 import { migrateDatabase } from "@/db/migrate";
 import { lines, ovens, sites } from "@/db/schema/fleet";
-import { portFrom, sqldBinary, startSqld } from "@/scripts/support/deploy-stack";
+import { findSqld, portFrom, startSqld } from "@/scripts/support/deploy-stack";
 
 // The same code against a libSQL server (sqld) over HTTP, as DATABASE_URL=http://… deploys it:
 // migrations, foreign keys, transactions that commit or roll back whole, and many at once.
-const hasSqld = (() => {
-  try {
-    return !!sqldBinary();
-  } catch {
-    return false;
-  }
-})();
+const hasSqld = findSqld() !== null;
 
 let dir: string;
 let server: Awaited<ReturnType<typeof startSqld>>;
