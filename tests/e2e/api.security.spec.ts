@@ -1,6 +1,6 @@
 import { expect, test, type APIResponse } from "@playwright/test";
 import { E2E } from "../../playwright.config";
-import { PASSWORD, USERS } from "./support";
+import { PASSWORD, signIn, USERS } from "./support";
 
 // Security basics of every response: a content security policy that forbids framing, plugins,
 // foreign forms and base URLs, no content sniffing, a session cookie that scripts cannot read,
@@ -43,12 +43,7 @@ test("pages and API answers carry the security headers", async ({ request }) => 
 test("the session cookie is httpOnly, SameSite=Lax, and not Secure on this http server; signed-in pages carry the policy", async ({ browser, baseURL }) => {
   const context = await browser.newContext();
   const page = await context.newPage();
-  await page.goto("/sign-in");
-  await page.waitForLoadState("networkidle");
-  await page.getByLabel("E-mail", { exact: true }).fill(USERS.viewer);
-  await page.getByLabel("Password", { exact: true }).fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in", exact: true }).click();
-  await expect(page).toHaveURL(/\/fleet/);
+  await signIn(page, "viewer");
   const cookies = await context.cookies(baseURL);
   const session = cookies.find((c) => c.name.endsWith("authjs.session-token"));
   expect(session, JSON.stringify(cookies.map((c) => c.name))).toBeTruthy();
@@ -84,11 +79,7 @@ test("failed sign-ins from one address are limited, through the library's endpoi
   // The sign-in form from that address says so too, before checking anything.
   const context = await browser.newContext({ extraHTTPHeaders: { "x-forwarded-for": "198.51.100.77" } });
   const page = await context.newPage();
-  await page.goto("/sign-in");
-  await page.waitForLoadState("networkidle");
-  await page.getByLabel("E-mail", { exact: true }).fill(USERS.viewer);
-  await page.getByLabel("Password", { exact: true }).fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await signIn(page, "viewer", PASSWORD, false);
   await expect(page.getByText(/Too many sign-in attempts from your network\. Wait about \d+ (seconds|minutes?)/)).toBeVisible();
   await context.close();
   // Another address signs in as usual.
