@@ -12,7 +12,8 @@ import { driftSettings } from "@/db/schema/drift";
 import { recomputeOven } from "@/db/queries/drift";
 import { asc, gte, lte, isNull } from "drizzle-orm";
 import { TRACKED_METRICS } from "@/lib/tracked-metrics";
-import { AppError, forbidden } from "@/lib/errors";
+import { AppError, forbidden, notFound } from "@/lib/errors";
+import { ovens } from "@/db/schema/fleet";
 import { can } from "@/lib/permissions";
 
 export const acknowledgeAlertDef = defineAction({
@@ -53,6 +54,8 @@ export const setDriftSettingsDef = defineAction({
   run: async ({ db, actor, input }) =>
     db.transaction(async (tx) => {
       const { ovenId, ...params } = input;
+      const [oven] = await tx.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId));
+      if (!oven) throw notFound("That oven");
       const [before] = await tx.select().from(driftSettings).where(eq(driftSettings.ovenId, ovenId));
       const row = { ovenId, ...params, updatedBy: actor.userId, updatedAt: new Date() };
       await tx.insert(driftSettings).values(row).onConflictDoUpdate({ target: driftSettings.ovenId, set: row });
@@ -69,6 +72,8 @@ export const setBaselineByDatesDef = defineAction({
   permission: "baseline.manage",
   schema: baselineByDatesSchema,
   run: async ({ db, actor, input }) => {
+    const [oven] = await db.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, input.ovenId));
+    if (!oven) throw notFound("That oven");
     const picked = await db
       .select({ id: runs.id })
       .from(runs)

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { processWindowSchema } from "@/lib/thermal/windows";
+import { findWindowPreset, processWindowSchema, WINDOW_PRESETS } from "@/lib/thermal/windows";
 
 const blank = (v: unknown) => (v === "" || v === null ? undefined : v);
 const num = (v: unknown) => (typeof v === "string" ? (v.trim() === "" ? undefined : Number(v.trim().replace(",", "."))) : v);
@@ -28,7 +28,7 @@ const valuesFrom = (raw: Record<string, unknown>): unknown => {
 
 const base = z.object({
   name: z.string({ error: "is required" }).trim().min(1, "is required").max(80, "at most 80 characters"),
-  presetId: z.preprocess(blank, z.string().max(40).optional()),
+  presetId: z.preprocess(blank, z.string().refine((id) => findWindowPreset(id) !== undefined, `one of ${WINDOW_PRESETS.map((p) => p.id).join(", ")}`).optional()),
   notes: z.preprocess(blank, z.string().trim().max(2000, "at most 2000 characters").optional()),
 });
 

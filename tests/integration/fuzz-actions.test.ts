@@ -97,9 +97,16 @@ describe("fuzzed server actions answer with a result the form can show", () => {
       await fc.assert(
         fc.asyncProperty(formArb(input), who, async (fields, r) => {
           current.actor = r ? actors[r] : null;
-          const result = await invokeAction(def, toFormData(fields));
+          const spy = vi.spyOn(console, "error").mockImplementation(() => {});
+          let loggedCalls: unknown[][] = [];
+          const result = await invokeAction(def, toFormData(fields)).finally(() => {
+            loggedCalls = [...spy.mock.calls];
+            spy.mockRestore();
+          });
           if (!result.ok) {
-            expect(EXPECTED, `${name} as ${r}: ${result.code} ${result.message} for ${JSON.stringify(fields.map(([k, v]) => [k, typeof v === "string" ? v.slice(0, 80) : `file ${v.fileName}`]))}`).toContain(result.code);
+            // An "internal" answer carries the server's logged error into the report, so a rare failure says why.
+            const cause = result.code === "internal" ? ` (logged: ${loggedCalls.map((c) => c.map((x) => (x instanceof Error ? `${x.cause ? `${String(x.cause)} — ` : ""}${x.message}` : String(x))).join(" ")).join("; ").slice(0, 600)})` : "";
+            expect(EXPECTED, `${name} as ${r}: ${result.code} ${result.message}${cause} for ${JSON.stringify(fields.map(([k, v]) => [k, typeof v === "string" ? v.slice(0, 80) : `file ${v.fileName}`]))}`).toContain(result.code);
             expect(typeof result.message).toBe("string");
           }
         }),
