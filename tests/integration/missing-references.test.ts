@@ -67,4 +67,27 @@ describe("a reference to a record that does not exist", () => {
     expect(cases.length).toBeGreaterThanOrEqual(10);
     expect(answers).toEqual([]);
   });
+
+  it("and references to other records that do exist (ids 1 to 15) never surface as internal errors", async () => {
+    const logged = vi.spyOn(console, "error").mockImplementation(() => {});
+    const internal: string[] = [];
+    for (const [name, make] of Object.entries(ACTION_INPUTS)) {
+      const def = ACTION_REGISTRY.get(name)!;
+      const allowed = allowedRoles(def.permission);
+      const role = allowed.find((r) => r !== "admin") ?? allowed[0];
+      const valid = await make(t.db, role);
+      for (const field of Object.keys(valid).filter((k) => /Id$/.test(k) && /^\d+$/.test(String(valid[k])))) {
+        for (let id = 1; id <= 15; id++) {
+          const form = new FormData();
+          for (const [k, v] of Object.entries({ ...valid, [field]: String(id) })) form.append(k, String(v));
+          current.actor = await actorFor(t.db, role);
+          const before = logged.mock.calls.length;
+          const r = await invokeAction(def, form);
+          if (!r.ok && r.code === "internal") internal.push(`${name}.${field}=${id}: ${String((logged.mock.calls[before]?.[1] as Error | undefined)?.cause ?? logged.mock.calls[before]?.[1]).slice(0, 160)}`);
+        }
+      }
+    }
+    logged.mockRestore();
+    expect(internal).toEqual([]);
+  });
 });
