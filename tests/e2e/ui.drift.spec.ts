@@ -27,6 +27,11 @@ test("a manager sees the fleet worst first, with L2-RF1 needing attention and wh
   const spread = page.getByRole("region", { name: /Critical-phase spread/ });
   await expect(spread).toContainText(/Projected to cross 13 °C in about \d+ days/);
   await expect(spread.locator("svg.recharts-surface")).toBeVisible();
+  // Every completed work order in the period is a mark on the time axis (one path for all of them).
+  const marks = spread.getByTestId("work-order-marks");
+  const count = Number(await marks.getAttribute("data-count"));
+  expect(count).toBeGreaterThan(30);
+  expect(((await marks.getAttribute("d")) ?? "").split("M").length - 1).toBeGreaterThanOrEqual(count - 5);
   await page.screenshot({ path: `test-results/screenshots/${info.project.name}-l2rf1-health.png`, fullPage: true });
 });
 
