@@ -46,7 +46,10 @@ function WorkOrderMarks({ times }: { times: number[] }) {
     if (px == null || !Number.isFinite(px) || px < area.x - 0.5 || px > area.x + area.width + 0.5) continue;
     d += `M${px.toFixed(1)} ${top}V${bottom}`;
   }
-  return d ? <path d={d} stroke="#0f766e" strokeOpacity={0.35} strokeDasharray="1 3" fill="none" data-testid="work-order-marks" data-count={times.length} /> : null;
+  // Dense marks (daily tasks on a phone-width chart) fade so the runs stay readable over them.
+  const spacing = area.width / times.length;
+  const opacity = spacing >= 6 ? 0.35 : Math.max(0.12, (0.35 * spacing) / 6);
+  return d ? <path d={d} stroke="#0f766e" strokeOpacity={opacity} strokeDasharray="1 3" fill="none" data-testid="work-order-marks" data-count={times.length} /> : null;
 }
 
 /**
