@@ -4,12 +4,10 @@ import path from "node:path";
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { createTestDb } from "./test-db";
-import { createApiToken } from "@/db/queries/api-tokens";
-import { getUserByEmail } from "@/db/queries/users";
-import { ROLES, type Role } from "@/db/schema/users";
-import { dynamicSegments, isRouteFile, moduleExports, urlPathOf, walk, WRITE_METHODS } from "../matrix/enumerate";
+import type { Role } from "@/db/schema/users";
+import { dynamicSegments, urlPathOf } from "../matrix/enumerate";
 import { hostileString, schemaVocabulary } from "./fuzz/arbitraries";
-import { allowedRoles, authArb, buildBody, expectClientAnswer, hostileId, mutatedBody, randomBody } from "./fuzz/requests";
+import { allowedRoles, authArb, buildBody, expectClientAnswer, hostileId, mutatedBody, randomBody, roleTokens, writeRoutes } from "./fuzz/requests";
 import { inProcessGet, matrixCtx, seedFor } from "./fuzz/seeds";
 
 // Every write handler under app/ (found by parsing the files, so a new one is fuzzed without
@@ -26,12 +24,7 @@ const NOT_FUZZED: Record<string, string> = {
 };
 
 type Handler = ((req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>) & { permission?: string | null };
-const routes = walk(ROOT, path.join(ROOT, "app"))
-  .filter(isRouteFile)
-  .flatMap((file) => {
-    const names = moduleExports(file, fs.readFileSync(path.join(ROOT, file), "utf8")).names;
-    return WRITE_METHODS.filter((m) => names.has(m)).map((method) => ({ file, method }));
-  });
+const routes = writeRoutes();
 
 let t: Awaited<ReturnType<typeof createTestDb>>;
 let uploadDir: string;
@@ -45,10 +38,7 @@ beforeAll(async () => {
   t = await createTestDb();
   uploadDir = fs.mkdtempSync(path.join(os.tmpdir(), "ovenward-fuzz-uploads-"));
   Object.assign(process.env, { DATABASE_URL: t.url, UPLOAD_DIR: uploadDir, API_RATE_LIMIT_PER_MINUTE: "0", CRON_SECRET: "fuzz-cron-secret-0123456789" });
-  for (const role of ROLES) {
-    const u = await getUserByEmail(t.db, role === "technician" ? "tech@brightwater.example" : `${role}@brightwater.example`);
-    tokens[role] = (await createApiToken(t.db, { userId: u!.id, name: `fuzz-${role}` }, null)).secret;
-  }
+  Object.assign(tokens, await roleTokens(t.db, "fuzz"));
   vocab = await schemaVocabulary();
   // Every seed is made before any fuzzing: a fuzzed edit may rename the oven they look up.
   for (const { file, method } of routes) {

@@ -3,11 +3,9 @@ import os from "node:os";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { createTestDb } from "./test-db";
-import { createApiToken } from "@/db/queries/api-tokens";
-import { getUserByEmail } from "@/db/queries/users";
-import { ROLES, type Role } from "@/db/schema/users";
-import { dynamicSegments, isRouteFile, moduleExports, urlPathOf, walk, WRITE_METHODS } from "../matrix/enumerate";
-import { allowedRoles, buildBody, LOGGER_FILE, PNG_FILE } from "./fuzz/requests";
+import type { Role } from "@/db/schema/users";
+import { dynamicSegments, urlPathOf } from "../matrix/enumerate";
+import { allowedRoles, buildBody, LOGGER_FILE, PNG_FILE, roleTokens, writeRoutes } from "./fuzz/requests";
 import { inProcessGet, matrixCtx, seedFor, type Seed } from "./fuzz/seeds";
 
 // Every write route, given the role matrix's valid request with one reference pointing at a record
@@ -18,13 +16,7 @@ vi.mock("@/lib/auth", () => ({ auth: async () => null }));
 const ROOT = path.resolve(__dirname, "../..");
 const MISSING = "987654";
 type Handler = ((req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>) & { permission?: string | null };
-const routes = walk(ROOT, path.join(ROOT, "app"))
-  .filter(isRouteFile)
-  .filter((f) => !f.includes("[...nextauth]"))
-  .flatMap((file) => {
-    const names = moduleExports(file, fs.readFileSync(path.join(ROOT, file), "utf8")).names;
-    return WRITE_METHODS.filter((m) => names.has(m)).map((method) => ({ file, method }));
-  });
+const routes = writeRoutes().filter((r) => !r.file.includes("[...nextauth]"));
 
 let t: Awaited<ReturnType<typeof createTestDb>>;
 let uploadDir: string;
@@ -34,10 +26,7 @@ beforeAll(async () => {
   t = await createTestDb();
   uploadDir = fs.mkdtempSync(path.join(os.tmpdir(), "ovenward-missing-route-refs-"));
   Object.assign(process.env, { DATABASE_URL: t.url, UPLOAD_DIR: uploadDir, API_RATE_LIMIT_PER_MINUTE: "0", CRON_SECRET: "missing-refs-cron-secret-0123" });
-  for (const role of ROLES) {
-    const u = await getUserByEmail(t.db, role === "technician" ? "tech@brightwater.example" : `${role}@brightwater.example`);
-    tokens[role] = (await createApiToken(t.db, { userId: u!.id, name: `missing-${role}` }, null)).secret;
-  }
+  Object.assign(tokens, await roleTokens(t.db, "missing"));
 });
 afterAll(() => {
   t?.close();

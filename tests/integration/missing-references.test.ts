@@ -37,29 +37,37 @@ afterAll(() => {
   fs.rmSync(uploadDir, { recursive: true, force: true });
 });
 
+/** Each action's valid input (made for a role that may use it, not admin when another will do) and its reference fields. */
+async function* referenceFields() {
+  for (const [name, make] of Object.entries(ACTION_INPUTS)) {
+    const def = ACTION_REGISTRY.get(name)!;
+    const allowed = allowedRoles(def.permission);
+    const role = allowed.find((r) => r !== "admin") ?? allowed[0];
+    const valid = await make(t.db, role);
+    for (const field of Object.keys(valid).filter((k) => /Id$/.test(k))) yield { name, def, allowed, role, valid, field };
+  }
+}
+const formOf = (input: Record<string, unknown>) => {
+  const form = new FormData();
+  for (const [k, v] of Object.entries(input)) form.append(k, String(v));
+  return form;
+};
+
 describe("a reference to a record that does not exist", () => {
   it("is answered with not_found or invalid_input by every action that takes one", async () => {
     const errors = vi.spyOn(console, "error").mockImplementation(() => {});
     const answers: string[] = [];
-    for (const [name, make] of Object.entries(ACTION_INPUTS)) {
-      const def = ACTION_REGISTRY.get(name)!;
-      const allowed = allowedRoles(def.permission);
-      const role = allowed.find((r) => r !== "admin") ?? allowed[0];
-      const valid = await make(t.db, role);
-      for (const field of Object.keys(valid).filter((k) => /Id$/.test(k))) {
-        const missing = /^\d+$/.test(String(valid[field])) ? MISSING.numeric : MISSING.uuid;
-        // As the role the input was made for, and as an admin where admins may: someone else's
-        // record may be refused as forbidden to the first (saying nothing of whether it exists),
-        // but an admin is told it is not there.
-        for (const as of new Set([role, ...(allowed.includes("admin") ? (["admin"] as const) : [])])) {
-          const form = new FormData();
-          for (const [k, v] of Object.entries({ ...valid, [field]: missing })) form.append(k, String(v));
-          current.actor = await actorFor(t.db, as);
-          const r = await invokeAction(def, form);
-          const fine = as === "admin" ? /^(not_found|invalid_input)$/ : /^(not_found|invalid_input|forbidden)$/;
-          if (r.ok || !fine.test(r.code)) answers.push(`${name}.${field} as ${as}: ${r.ok ? "ok" : r.code}`);
-          cases.push({ name, field, role: as, input: valid });
-        }
+    for await (const { name, def, allowed, role, valid, field } of referenceFields()) {
+      const missing = /^\d+$/.test(String(valid[field])) ? MISSING.numeric : MISSING.uuid;
+      // As the role the input was made for, and as an admin where admins may: someone else's
+      // record may be refused as forbidden to the first (saying nothing of whether it exists),
+      // but an admin is told it is not there.
+      for (const as of new Set([role, ...(allowed.includes("admin") ? (["admin"] as const) : [])])) {
+        current.actor = await actorFor(t.db, as);
+        const r = await invokeAction(def, formOf({ ...valid, [field]: missing }));
+        const fine = as === "admin" ? /^(not_found|invalid_input)$/ : /^(not_found|invalid_input|forbidden)$/;
+        if (r.ok || !fine.test(r.code)) answers.push(`${name}.${field} as ${as}: ${r.ok ? "ok" : r.code}`);
+        cases.push({ name, field, role: as, input: valid });
       }
     }
     errors.mockRestore();
@@ -71,20 +79,13 @@ describe("a reference to a record that does not exist", () => {
   it("and references to other records that do exist (ids 1 to 15) never surface as internal errors", async () => {
     const logged = vi.spyOn(console, "error").mockImplementation(() => {});
     const internal: string[] = [];
-    for (const [name, make] of Object.entries(ACTION_INPUTS)) {
-      const def = ACTION_REGISTRY.get(name)!;
-      const allowed = allowedRoles(def.permission);
-      const role = allowed.find((r) => r !== "admin") ?? allowed[0];
-      const valid = await make(t.db, role);
-      for (const field of Object.keys(valid).filter((k) => /Id$/.test(k) && /^\d+$/.test(String(valid[k])))) {
-        for (let id = 1; id <= 15; id++) {
-          const form = new FormData();
-          for (const [k, v] of Object.entries({ ...valid, [field]: String(id) })) form.append(k, String(v));
-          current.actor = await actorFor(t.db, role);
-          const before = logged.mock.calls.length;
-          const r = await invokeAction(def, form);
-          if (!r.ok && r.code === "internal") internal.push(`${name}.${field}=${id}: ${String((logged.mock.calls[before]?.[1] as Error | undefined)?.cause ?? logged.mock.calls[before]?.[1]).slice(0, 160)}`);
-        }
+    for await (const { name, def, role, valid, field } of referenceFields()) {
+      if (!/^\d+$/.test(String(valid[field]))) continue;
+      for (let id = 1; id <= 15; id++) {
+        current.actor = await actorFor(t.db, role);
+        const before = logged.mock.calls.length;
+        const r = await invokeAction(def, formOf({ ...valid, [field]: String(id) }));
+        if (!r.ok && r.code === "internal") internal.push(`${name}.${field}=${id}: ${String((logged.mock.calls[before]?.[1] as Error | undefined)?.cause ?? logged.mock.calls[before]?.[1]).slice(0, 160)}`);
       }
     }
     logged.mockRestore();

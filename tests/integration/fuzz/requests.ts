@@ -4,6 +4,10 @@ import fc from "fast-check";
 import { expect } from "vitest";
 import { ROLES, type Role } from "@/db/schema/users";
 import { can, PERMISSIONS, type Permission } from "@/lib/permissions";
+import type { Db } from "@/db/client";
+import { createApiToken } from "@/db/queries/api-tokens";
+import { getUserByEmail } from "@/db/queries/users";
+import { isRouteFile, moduleExports, walk, WRITE_METHODS } from "../../matrix/enumerate";
 import { claimedType, fileBytes, hostileFileName, hostileString, jsonValue, toFormValue, toJsonText } from "./arbitraries";
 import type { Seed } from "./seeds";
 import { mutate } from "./seeds";
@@ -14,6 +18,26 @@ const FIXTURES = path.join(ROOT, "tests/fixtures");
 export const LOGGER_FILE = new Uint8Array(fs.readFileSync(path.join(FIXTURES, "logger-files/generic-8ch.csv")));
 export const PNG_FILE = new Uint8Array(fs.readFileSync(path.join(FIXTURES, "checklist-photo.png")));
 const loggerSamples = fs.readdirSync(path.join(FIXTURES, "logger-files")).map((f) => new Uint8Array(fs.readFileSync(path.join(FIXTURES, "logger-files", f))));
+
+/** Every write handler under app/, found by parsing the route files: one entry per method. */
+export function writeRoutes(): { file: string; method: (typeof WRITE_METHODS)[number] }[] {
+  return walk(ROOT, path.join(ROOT, "app"))
+    .filter(isRouteFile)
+    .flatMap((file) => {
+      const names = moduleExports(file, fs.readFileSync(path.join(ROOT, file), "utf8")).names;
+      return WRITE_METHODS.filter((m) => names.has(m)).map((method) => ({ file, method }));
+    });
+}
+
+/** A bearer token for each demo role's user, made straight in the database. */
+export async function roleTokens(db: Db, name: string): Promise<Record<Role, string>> {
+  const tokens = {} as Record<Role, string>;
+  for (const role of ROLES) {
+    const u = await getUserByEmail(db, role === "technician" ? "tech@brightwater.example" : `${role}@brightwater.example`);
+    tokens[role] = (await createApiToken(db, { userId: u!.id, name: `${name}-${role}` }, null)).secret;
+  }
+  return tokens;
+}
 
 type Part = { name: string; value: string } | { name: string; fileName: string; bytes: Uint8Array; type: string };
 export type BodyCase = { kind: "json"; text: string } | { kind: "multipart"; parts: Part[] } | { kind: "broken-multipart"; text: string } | { kind: "empty" };
