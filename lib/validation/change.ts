@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plantDate } from "./dates";
 
 export const CHANGE_AREA_VALUES = ["fan", "baffle", "heater", "controller_firmware", "insulation", "sensor", "conveyor", "exhaust", "other"] as const;
 export const CHANGE_AREA_LABELS: Record<(typeof CHANGE_AREA_VALUES)[number], string> = {
@@ -20,7 +21,7 @@ const blank = (v: unknown) => (v === "" ? undefined : v);
 export const changeCreateSchema = z.object({
   at: z.preprocess(
     blank,
-    z.coerce.date({ error: "a date and time, e.g. 2026-11-20T14:30" }).refine((d) => d.getTime() <= Date.now() + 5 * 60_000, "cannot be in the future"),
+    plantDate("a date and time, e.g. 2026-11-20T14:30").refine((d) => d.getTime() <= Date.now() + 5 * 60_000, "cannot be in the future"),
   ),
   area: z.enum(CHANGE_AREA_VALUES, { error: "choose an area" }),
   summary: z.string({ error: "is required" }).trim().min(3, "say in a few words what changed").max(120, "at most 120 characters"),
@@ -34,7 +35,7 @@ export type ChangeCreateInput = z.infer<typeof changeCreateSchema>;
 export const changeFilterSchema = z.object({
   ovenId: z.preprocess(blank, z.coerce.number().int().positive().optional()),
   area: z.preprocess(blank, z.enum(CHANGE_AREA_VALUES).optional()),
-  from: z.preprocess(blank, z.coerce.date().optional()),
-  to: z.preprocess(blank, z.coerce.date().optional()),
+  from: z.preprocess(blank, plantDate("a date").optional()),
+  to: z.preprocess(blank, plantDate("a date").optional()),
 });
 export type ChangeFilter = z.infer<typeof changeFilterSchema>;

@@ -1,12 +1,13 @@
 import { z } from "zod";
+import { plantDate } from "./dates";
 import { TRACKED_METRICS } from "@/lib/tracked-metrics";
 
 const blank = (v: unknown) => (v === "" ? undefined : v);
 
 export const trendQuerySchema = z.object({
   metric: z.enum(TRACKED_METRICS, { error: `one of ${TRACKED_METRICS.join(", ")}` }).default("deltaTPeak"),
-  from: z.preprocess(blank, z.coerce.date({ error: "a date, e.g. 2026-06-01" }).optional()),
-  to: z.preprocess(blank, z.coerce.date({ error: "a date, e.g. 2026-12-01" }).optional()),
+  from: z.preprocess(blank, plantDate("a date, e.g. 2026-06-01").optional()),
+  to: z.preprocess(blank, plantDate("a date, e.g. 2026-12-01").optional()),
 });
 
 export const impactQuerySchema = z.object({
@@ -49,6 +50,6 @@ export const driftSettingsSchema = z.object({
 export const baselineByDatesSchema = z.object({
   ovenId: z.coerce.number().int().positive(),
   metric: z.enum(TRACKED_METRICS),
-  from: z.coerce.date({ error: "a date" }),
-  to: z.coerce.date({ error: "a date" }),
+  from: plantDate("a date"),
+  to: plantDate("a date"),
 }).refine((v) => v.to > v.from, { path: ["to"], message: "must be after the start" });

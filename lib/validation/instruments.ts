@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plantDate } from "./dates";
 
 const blank = (v: unknown) => (v === "" || v === null ? undefined : v);
 const optionalNumber = (msg: string, min: number, max: number) =>
@@ -34,7 +35,7 @@ const offsetsSchema = z.record(z.string().regex(/^\d{1,2}$/, "channel numbers"),
 
 export const calibrationSchema = z
   .object({
-    performedAt: z.coerce.date({ error: "a date as YYYY-MM-DD" }),
+    performedAt: plantDate("a date as YYYY-MM-DD"),
     performedBy: z.string({ error: "is required" }).trim().min(1, "is required").max(80, "at most 80 characters"),
     reference: z.string({ error: "is required" }).trim().min(1, "is required").max(200, "at most 200 characters"),
     offsets: z.preprocess((v) => {
@@ -47,7 +48,7 @@ export const calibrationSchema = z
       }
     }, offsetsSchema.or(z.literal("bad")).refine((v) => v !== "bad", 'not valid JSON, e.g. {"1": -0.2, "2": 0.1}')),
     expandedUncertainty: optionalNumber("a number (°C)", 0, 20),
-    dueAt: z.preprocess(blank, z.coerce.date({ error: "a date as YYYY-MM-DD" }).optional()),
+    dueAt: z.preprocess(blank, plantDate("a date as YYYY-MM-DD").optional()),
   })
   .transform((v) => ({ ...v, offsets: v.offsets as Record<string, number> }))
   .refine((v) => !v.dueAt || v.dueAt > v.performedAt, { message: "must be after the calibration date", path: ["dueAt"] });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { EARLIEST_YEAR, isCalendarDate, LATEST_YEAR, plantDate } from "./dates";
 
 // Shared by the API, the forms and the queries. Enum lists are repeated here (not imported from
 // the schema) so this file imports only zod; a unit test keeps them in step.
@@ -8,8 +9,8 @@ const PRIORITIES = ["low", "normal", "high", "urgent"] as const;
 const ROLES = ["viewer", "technician", "engineer", "manager", "admin"] as const;
 export const METER_KIND_VALUES = ["heater_hours", "conveyor_hours", "cycles"] as const;
 
-const localDateTime = z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, "a local date-time as YYYY-MM-DDTHH:mm");
-const isoInstant = z.coerce.date({ error: "a date-time (ISO 8601)" });
+const localDateTime = z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, "a local date-time as YYYY-MM-DDTHH:mm").refine(isCalendarDate, `a date-time that exists, between ${EARLIEST_YEAR} and ${LATEST_YEAR}`);
+const isoInstant = plantDate("a date-time (ISO 8601)");
 const checklistItem = z.object({
   id: z.string().trim().min(1, "is required").max(60),
   label: z.string().trim().min(1, "is required").max(300),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { EARLIEST_YEAR, isCalendarDate, LATEST_YEAR } from "./dates";
 
 export const OVEN_KIND_VALUES = ["convection", "batch_ir", "vapour_phase", "other"] as const;
 export const SERVICE_STATE_VALUES = ["in_service", "down", "retired"] as const;
@@ -44,7 +45,7 @@ const fields = {
   serial: optionalText(80),
   installedOn: z.preprocess(
     (v) => (v === "" || v === undefined ? null : v),
-    z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "a date as YYYY-MM-DD").nullable(),
+    z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "a date as YYYY-MM-DD").refine(isCalendarDate, `a day that exists, between ${EARLIEST_YEAR} and ${LATEST_YEAR}`).nullable(),
   ),
   serviceState: z.enum(SERVICE_STATE_VALUES, { error: "in_service, down or retired" }),
   notes: optionalText(2000),

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { plantDate } from "./dates";
 
 const blank = (v: unknown) => (v === "" || v === null ? undefined : v);
 const optionalId = (what: string) => z.preprocess(blank, z.coerce.number({ error: `choose a ${what}` }).int().positive(`choose a ${what}`).optional());
@@ -34,7 +35,7 @@ export const runUploadSchema = z.object({
   startState: z.preprocess(blank, z.enum(["cold", "hot"], { error: "cold or hot" }).optional()),
   conveyorSpeed: z.preprocess(blank, z.coerce.number({ error: "a number (cm/min)" }).finite().min(0, "cannot be negative").max(1000, "at most 1000 cm/min").optional()),
   setPoints: jsonField(setPointsSchema, '{"Z1": 120, "Z2": 150}'),
-  runAt: z.preprocess(blank, z.coerce.date({ error: "an ISO date-time, e.g. 2026-03-01T08:30:00Z" }).optional()),
+  runAt: z.preprocess(blank, plantDate("an ISO date-time, e.g. 2026-03-01T08:30:00Z").optional()),
   operator: z.preprocess(blank, z.string().trim().max(80, "at most 80 characters").optional()),
   notes: z.preprocess(blank, z.string().trim().max(2000, "at most 2000 characters").optional()),
 });
@@ -50,8 +51,8 @@ export const runListQuerySchema = z.object({
   boardId: optionalId("board"),
   verdict: z.preprocess(blank, z.enum(["pass", "marginal", "fail"], { error: "pass, marginal or fail" }).optional()),
   calibration: z.preprocess(blank, z.enum(["valid", "lapsed", "none"], { error: "valid, lapsed or none" }).optional()),
-  from: z.preprocess(blank, z.coerce.date({ error: "a date, e.g. 2026-01-31" }).optional()),
-  to: z.preprocess(blank, z.coerce.date({ error: "a date, e.g. 2026-01-31" }).optional()),
+  from: z.preprocess(blank, plantDate("a date, e.g. 2026-01-31").optional()),
+  to: z.preprocess(blank, plantDate("a date, e.g. 2026-01-31").optional()),
   page: z.preprocess(blank, z.coerce.number().int().min(1, "at least 1").default(1)),
   pageSize: z.preprocess(blank, z.coerce.number().int().min(1, "at least 1").max(200, "at most 200").default(25)),
   sort: z.preprocess(blank, z.enum(RUN_SORTS, { error: `one of ${RUN_SORTS.join(", ")}` }).default("-runAt")),
