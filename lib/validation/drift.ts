@@ -14,7 +14,7 @@ export const impactQuerySchema = z.object({
   metric: z.enum(TRACKED_METRICS, { error: `one of ${TRACKED_METRICS.join(", ")}` }).default("deltaTPeak"),
   before: z.preprocess(blank, z.coerce.number().int().min(2, "at least 2").max(200, "at most 200").default(10)),
   after: z.preprocess(blank, z.coerce.number().int().min(2, "at least 2").max(200, "at most 200").default(10)),
-  delta: z.preprocess(blank, z.coerce.number().positive("a positive difference").optional()),
+  delta: z.preprocess(blank, z.coerce.number().positive("a positive difference").max(1000, "at most 1000").optional()),
 });
 
 export const alertQuerySchema = z.object({

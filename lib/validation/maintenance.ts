@@ -120,7 +120,8 @@ export const commentSchema = z.object({ body: z.string().trim().min(1, "is requi
 
 export const meterReadingSchema = z.object({
   kind: z.enum(METER_KIND_VALUES).default("heater_hours"),
-  value: z.coerce.number().min(0, "must be 0 or more"),
+  // A meter counts hours or cycles: a billion is decades of any oven's life, and keeps sums finite.
+  value: z.coerce.number().min(0, "must be 0 or more").max(1e9, "at most 1 000 000 000"),
   at: isoInstant.optional(),
 });
 export type MeterReadingInput = z.infer<typeof meterReadingSchema>;
