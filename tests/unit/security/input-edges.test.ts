@@ -44,7 +44,7 @@ describe("generateSchema", () => {
     expect(generateSchema.safeParse({}).success).toBe(true);
     const far = generateSchema.safeParse({ until: "+275760-09-13T00:00:00.000Z" });
     expect(far.success).toBe(false);
-    expect(far.error?.issues[0]).toMatchObject({ path: ["until"], message: "at most 366 days from now" });
-    expect(generateSchema.safeParse({ until: inDays(367) }).success).toBe(false);
+    expect(far.error?.issues[0]).toMatchObject({ path: ["until"], message: "a date between 1970 and 2200" });
+    expect(generateSchema.safeParse({ until: inDays(367) }).error?.issues[0]).toMatchObject({ path: ["until"], message: "at most 366 days from now" });
   });
 });
