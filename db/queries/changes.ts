@@ -1,12 +1,12 @@
 import "server-only";
-import { and, asc, desc, eq, gte, lte, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, gte, inArray, lte, type SQL } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
 import { changeAttachments, changes, type ChangeRow } from "../schema/changes";
-import { inArray } from "drizzle-orm";
 import { storeSniffedUpload } from "@/lib/uploads/store";
 import { ovens } from "../schema/fleet";
 import { users } from "../schema/users";
 import { recordAudit } from "./audit";
+import { requireOven } from "./ovens";
 import type { Actor } from "@/lib/actor";
 import { notFound } from "@/lib/errors";
 import type { ChangeCreateInput, ChangeFilter } from "@/lib/validation/change";
@@ -16,13 +16,10 @@ type Upload = { name: string; bytes: Uint8Array };
 /** Logs a change with its photos and documents; a refused file stops it before anything is written. */
 export async function createChange(db: Db, ovenId: number, input: ChangeCreateInput, actor: Actor, files: Upload[] = []): Promise<ChangeRow> {
   // An unknown oven is refused before any file is stored, so a 404 leaves no bytes behind.
-  const [known] = await db.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId)).limit(1);
-  if (!known) throw notFound("That oven");
+  await requireOven(db, ovenId);
   const stored: Awaited<ReturnType<typeof storeSniffedUpload>>[] = [];
   for (const f of files) stored.push(await storeSniffedUpload(f));
   return db.transaction(async (tx) => {
-    const [oven] = await tx.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId)).limit(1);
-    if (!oven) throw notFound("That oven");
     const [row] = await tx
       .insert(changes)
       .values({ ovenId, at: input.at, area: input.area, summary: input.summary, before: input.before ?? null, after: input.after, reason: input.reason ?? null, workOrderId: input.workOrderId ?? null, createdBy: actor.userId })

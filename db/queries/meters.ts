@@ -1,11 +1,11 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import type { Db, DbOrTx } from "../client";
-import { ovens } from "../schema/fleet";
 import { meterReadings, type MeterKind } from "../schema/maintenance";
 import { recordAudit } from "./audit";
+import { requireOven } from "./ovens";
 import type { Actor } from "@/lib/actor";
-import { AppError, notFound } from "@/lib/errors";
+import { AppError } from "@/lib/errors";
 import { validateMeterReading } from "@/lib/maintenance/usage-triggers";
 import type { MeterReadingInput } from "@/lib/validation/maintenance";
 
@@ -25,8 +25,7 @@ async function latest(db: DbOrTx, ovenId: number, kind: MeterKind) {
 
 /** Records a reading; a meter only counts up (validateMeterReading says why one is refused). */
 export async function recordMeterReading(db: Db, ovenId: number, input: MeterReadingInput, actor: Actor, now = new Date()) {
-  const [oven] = await db.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId)).limit(1);
-  if (!oven) throw notFound("That oven");
+  await requireOven(db, ovenId);
   const at = input.at ?? now;
   return db.transaction(async (tx) => {
     const problem = validateMeterReading(await latest(tx, ovenId, input.kind), { at, value: input.value }, now);

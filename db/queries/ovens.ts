@@ -44,6 +44,13 @@ export async function getOven(db: DbOrTx, id: number) {
   return row ?? null;
 }
 
+/** The oven's id when it exists; otherwise not_found ("That oven was not found."), before anything is written. */
+export async function requireOven(db: DbOrTx, id: number): Promise<number> {
+  const [row] = await db.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, id)).limit(1);
+  if (!row) throw notFound("That oven");
+  return row.id;
+}
+
 const tagTaken = (tag: string) => () => `Another oven already has the tag ${tag}. Tags are unique across the plant.`;
 
 async function assertLine(tx: DbOrTx, lineId: number) {

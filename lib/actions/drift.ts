@@ -1,19 +1,16 @@
 import { z } from "zod";
-import { and, eq } from "drizzle-orm";
+import { and, asc, eq, gte, isNull, lte } from "drizzle-orm";
 import { defineAction } from "@/lib/action";
 import { acknowledgeAlert } from "@/db/queries/alerts";
-import { recomputeDrift } from "@/db/queries/drift";
+import { recomputeDrift, recomputeOven } from "@/db/queries/drift";
 import { refreshHealth } from "@/db/queries/health";
 import { recordAudit } from "@/db/queries/audit";
-import { driftBaselines } from "@/db/schema/drift";
+import { requireOven } from "@/db/queries/ovens";
+import { driftBaselines, driftSettings } from "@/db/schema/drift";
 import { runs } from "@/db/schema/runs";
 import { acknowledgeSchema, baselineByDatesSchema, baselineSchema, driftSettingsSchema } from "@/lib/validation/drift";
-import { driftSettings } from "@/db/schema/drift";
-import { recomputeOven } from "@/db/queries/drift";
-import { asc, gte, lte, isNull } from "drizzle-orm";
 import { TRACKED_METRICS } from "@/lib/tracked-metrics";
-import { AppError, forbidden, notFound } from "@/lib/errors";
-import { ovens } from "@/db/schema/fleet";
+import { AppError, forbidden } from "@/lib/errors";
 import { can } from "@/lib/permissions";
 
 export const acknowledgeAlertDef = defineAction({
@@ -54,8 +51,7 @@ export const setDriftSettingsDef = defineAction({
   run: async ({ db, actor, input }) =>
     db.transaction(async (tx) => {
       const { ovenId, ...params } = input;
-      const [oven] = await tx.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, ovenId));
-      if (!oven) throw notFound("That oven");
+      await requireOven(tx, ovenId);
       const [before] = await tx.select().from(driftSettings).where(eq(driftSettings.ovenId, ovenId));
       const row = { ovenId, ...params, updatedBy: actor.userId, updatedAt: new Date() };
       await tx.insert(driftSettings).values(row).onConflictDoUpdate({ target: driftSettings.ovenId, set: row });
@@ -72,8 +68,7 @@ export const setBaselineByDatesDef = defineAction({
   permission: "baseline.manage",
   schema: baselineByDatesSchema,
   run: async ({ db, actor, input }) => {
-    const [oven] = await db.select({ id: ovens.id }).from(ovens).where(eq(ovens.id, input.ovenId));
-    if (!oven) throw notFound("That oven");
+    await requireOven(db, input.ovenId);
     const picked = await db
       .select({ id: runs.id })
       .from(runs)

@@ -13,10 +13,8 @@ export function plantDate(error: string) {
 export function isCalendarDate(text: string): boolean {
   const m = /^(\d{4})-(\d{2})-(\d{2})(?:T(\d{2}):(\d{2}))?$/.exec(text);
   if (!m) return false;
-  const [y, mo, d, h = "0", mi = "0"] = m.slice(1).map((x) => x ?? "0");
-  const date = new Date(Date.UTC(Number(y), Number(mo) - 1, Number(d), Number(h), Number(mi)));
-  return (
-    Number(y) >= EARLIEST_YEAR && Number(y) <= LATEST_YEAR &&
-    date.getUTCMonth() === Number(mo) - 1 && date.getUTCDate() === Number(d) && Number(h) < 24 && Number(mi) < 60
-  );
+  const [y, mo, d, h, mi] = [m[1], m[2], m[3], m[4] ?? "0", m[5] ?? "0"].map(Number);
+  // Date.UTC rolls an impossible day over (2026-02-30 → 2 March); a real day reads back unchanged.
+  const date = new Date(Date.UTC(y, mo - 1, d));
+  return y >= EARLIEST_YEAR && y <= LATEST_YEAR && date.getUTCMonth() === mo - 1 && date.getUTCDate() === d && h < 24 && mi < 60;
 }
